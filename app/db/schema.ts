@@ -1,0 +1,108 @@
+import { sql } from "drizzle-orm";
+import { index, integer, primaryKey, real, sqliteTable, text } from "drizzle-orm/sqlite-core";
+import { ROLES, type Role } from "../utils/roles";
+
+const createdAt = () =>
+  integer("created_at", { mode: "timestamp_ms" }).notNull().default(sql`(unixepoch('subsec') * 1000)`);
+
+export const users = sqliteTable("users", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  role: text("role", { enum: ROLES }).$type<Role>().notNull(),
+  // Null until an invited user accepts and chooses a password.
+  passwordHash: text("password_hash"),
+  status: text("status", { enum: ["invited", "active", "disabled"] }).notNull().default("active"),
+  createdAt: createdAt(),
+});
+
+export const apiTokens = sqliteTable("api_tokens", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  userId: integer("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  label: text("label").notNull(),
+  // SHA-256 of the token: the token itself is shown once and never stored.
+  tokenHash: text("token_hash").notNull().unique(),
+  createdAt: createdAt(),
+  lastUsedAt: integer("last_used_at", { mode: "timestamp_ms" }),
+  revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+});
+
+/** Single-use links sent by e-mail: invitations and password resets. */
+export const emailLinks = sqliteTable("email_links", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  userId: integer("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+  purpose: text("purpose", { enum: ["invitation", "password-reset"] }).notNull(),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  usedAt: integer("used_at", { mode: "timestamp_ms" }),
+  createdAt: createdAt(),
+});
+
+/** Failed sign-ins keyed by the e-mail typed, so unknown addresses are throttled alike. */
+export const signInFailures = sqliteTable(
+  "sign_in_failures",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    email: text("email").notNull(),
+    at: integer("at", { mode: "timestamp_ms" }).notNull(),
+  },
+  (t) => [index("sign_in_failures_email_at").on(t.email, t.at)],
+);
+
+export const projects = sqliteTable("projects", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  name: text("name").notNull(),
+  description: text("description").notNull().default(""),
+  units: text("units", { enum: ["m", "ft", "usft"] }).notNull().default("m"),
+  // EPSG code of the working CRS, e.g. "EPSG:32617"; null until the first layer fixes it.
+  crs: text("crs"),
+  scaleFactor: real("scale_factor"),
+  createdBy: integer("created_by").references(() => users.id),
+  createdAt: createdAt(),
+});
+
+export const projectMembers = sqliteTable(
+  "project_members",
+  {
+    projectId: integer("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    userId: integer("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: ROLES }).$type<Role>().notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.userId] })],
+);
+
+export const auditEvents = sqliteTable(
+  "audit_events",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    at: createdAt(),
+    actorId: integer("actor_id").references(() => users.id),
+    projectId: integer("project_id").references(() => projects.id, { onDelete: "cascade" }),
+    action: text("action").notNull(),
+    subject: text("subject").notNull().default(""),
+    details: text("details", { mode: "json" }).$type<Record<string, unknown>>(),
+  },
+  (t) => [index("audit_events_project").on(t.projectId, t.at)],
+);
+
+export const mailOutbox = sqliteTable(
+  "mail_outbox",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    to: text("to").notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html"),
+    attachments: text("attachments", { mode: "json" }).$type<MailAttachment[]>(),
+    status: text("status", { enum: ["pending", "sending", "sent"] }).notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: integer("next_attempt_at", { mode: "timestamp_ms" }).notNull(),
+    lastError: text("last_error"),
+    createdAt: createdAt(),
+    sentAt: integer("sent_at", { mode: "timestamp_ms" }),
+  },
+  (t) => [index("mail_outbox_due").on(t.status, t.nextAttemptAt)],
+);
+
+export type MailAttachment = { filename: string; contentType: string; content: string };
+

@@ -1,0 +1,106 @@
+import { data, Form, useActionData, useLoaderData } from "react-router";
+import { z } from "zod";
+import type { Route } from "./+types/projects.$projectId";
+import { Button } from "~/components/ui/button";
+import { Card } from "~/components/ui/card";
+import { Field, SelectField } from "~/components/ui/field";
+import { Table } from "~/components/ui/table";
+import { recordAuditEvent } from "~/models/audit.server";
+import { findProjectForUser, listProjectMembers, removeProjectMember, upsertProjectMember } from "~/models/projects.server";
+import { findUserByEmail } from "~/models/users.server";
+import { EmailSchema } from "~/schemas/account-schemas";
+import { ACCESS } from "~/utils/access";
+import { readForm } from "~/utils/form.server";
+import { requireUser } from "~/utils/permissions.server";
+import { ROLE_LABELS, ROLES, type Role } from "~/utils/roles";
+import { UNIT_LABELS } from "~/utils/unit-labels";
+
+const MemberChangeSchema = z.discriminatedUnion("intent", [
+  z.object({ intent: z.literal("add-member"), email: EmailSchema, role: z.enum(ROLES) }),
+  z.object({ intent: z.literal("remove-member"), userId: z.coerce.number().int() }),
+]);
+
+const ParamsSchema = z.object({ projectId: z.coerce.number().int().positive() });
+
+async function loadProject(request: Request, params: unknown, roles: readonly Role[]) {
+  const user = await requireUser(request, { roles });
+  const parsed = ParamsSchema.safeParse(params);
+  const project = parsed.success ? findProjectForUser(parsed.data.projectId, user) : undefined;
+  if (!project) throw data(null, { status: 404 });
+  return { user, project };
+}
+
+export function meta({ data: d }: Route.MetaArgs) {
+  return [{ title: `${d?.project.name ?? "Project"} · Takeline` }];
+}
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { user, project } = await loadProject(request, params, ACCESS.projects);
+  return { project, members: listProjectMembers(project.id), mayManage: user.role === "planner" || user.role === "admin" };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const { user, project } = await loadProject(request, params, ["planner", "admin"]);
+  const parsed = MemberChangeSchema.safeParse(await readForm(request));
+  if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form." }, { status: 400 });
+  const change = parsed.data;
+  if (change.intent === "add-member") {
+    const member = findUserByEmail(change.email);
+    if (!member) return data({ error: "No account has that e-mail. An administrator can invite them first." }, { status: 404 });
+    upsertProjectMember(project.id, member.id, change.role);
+    recordAuditEvent({ actorId: user.id, projectId: project.id, action: "project.member-set", subject: member.email, details: { role: change.role } });
+  } else {
+    removeProjectMember(project.id, change.userId);
+    recordAuditEvent({ actorId: user.id, projectId: project.id, action: "project.member-removed", subject: String(change.userId) });
+  }
+  return data({ error: null });
+}
+
+export default function ProjectPage() {
+  const { project, members, mayManage } = useLoaderData<typeof loader>();
+  const result = useActionData<typeof action>();
+  return (
+    <div className="space-y-6">
+      <div>
+        <h1>{project.name}</h1>
+        <p className="text-ink-soft">{project.description}</p>
+      </div>
+      <Card title="Set-up">
+        <dl className="grid grid-cols-3 gap-4 text-sm">
+          <div><dt className="text-label text-ink-soft">Length unit</dt><dd>{UNIT_LABELS[project.units]}</dd></div>
+          <div><dt className="text-label text-ink-soft">Working CRS</dt><dd>{project.crs ?? "from first layer"}</dd></div>
+          <div><dt className="text-label text-ink-soft">Combined scale factor</dt><dd>{project.scaleFactor ?? "none (grid values only)"}</dd></div>
+        </dl>
+      </Card>
+      <Card title="Members">
+        <Table
+          rows={members}
+          rowKey={(m) => m.userId}
+          columns={[
+            { header: "Name", cell: (m) => m.name || "—" },
+            { header: "E-mail", cell: (m) => m.email },
+            { header: "Project role", cell: (m) => ROLE_LABELS[m.role] },
+            ...(mayManage
+              ? [{ header: "", cell: (m: (typeof members)[number]) => (
+                    <Form method="post">
+                      <input type="hidden" name="intent" value="remove-member" />
+                      <input type="hidden" name="userId" value={m.userId} />
+                      <Button type="submit" variant="quiet">Remove</Button>
+                    </Form>
+                  ) }]
+              : []),
+          ]}
+        />
+        {mayManage && (
+          <Form method="post" className="mt-4 grid grid-cols-[1fr_12rem_auto] items-end gap-3">
+            <input type="hidden" name="intent" value="add-member" />
+            <Field label="Add a member by e-mail" name="email" type="email" required />
+            <SelectField label="Project role" name="role" defaultValue="agent" options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))} />
+            <Button type="submit">Add</Button>
+          </Form>
+        )}
+        {result?.error && <p role="alert" className="mt-3 text-sm font-semibold text-danger">{result.error}</p>}
+      </Card>
+    </div>
+  );
+}

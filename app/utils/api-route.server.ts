@@ -1,0 +1,45 @@
+import type { z } from "zod";
+import { apiError, zodDetails } from "./api-error.server";
+
+/** Largest JSON body the API accepts; uploads have their own limit. */
+export const MAX_JSON_BYTES = 1024 * 1024;
+
+/**
+ * Wraps an API loader or action so that any failure becomes the JSON error envelope:
+ * thrown Responses pass through, anything else is logged and answered with a bare 500.
+ */
+export function apiHandler<A extends { request: Request }>(fn: (args: A) => Promise<Response> | Response) {
+  return async (args: A): Promise<Response> => {
+    try {
+      return await fn(args);
+    } catch (error) {
+      if (error instanceof Response) return error;
+      console.error("API error", error);
+      return apiError("internal", "Something went wrong on the server; the request was not completed.");
+    }
+  };
+}
+
+/** Reads and validates a JSON body; throws the envelope for a missing, oversized, malformed or invalid body. */
+export async function readJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+  const declared = Number(request.headers.get("content-length") ?? "0");
+  if (declared > MAX_JSON_BYTES) throw apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`);
+  const text = await request.text();
+  if (Buffer.byteLength(text) > MAX_JSON_BYTES) throw apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`);
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    throw apiError("bad_request", "The body is not valid JSON.");
+  }
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw apiError("unprocessable", "The request has invalid fields.", zodDetails(parsed.error));
+  return parsed.data;
+}
+
+/** Only the listed methods are allowed on an action. */
+export function requireMethod(request: Request, ...methods: string[]): void {
+  if (!methods.includes(request.method.toUpperCase())) {
+    throw apiError("method_not_allowed", `Use ${methods.join(" or ")} on this path.`, undefined, { Allow: methods.join(", ") });
+  }
+}

@@ -1,0 +1,1 @@
+export const UNIT_LABELS = { m: "metres", ft: "international feet", usft: "US survey feet" } as const;

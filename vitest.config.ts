@@ -1,0 +1,13 @@
+import { defineConfig } from "vitest/config";
+import { fileURLToPath } from "node:url";
+
+// Unit and integration tests sit beside the code; e2e journeys have their own config.
+export default defineConfig({
+  resolve: { alias: { "~": fileURLToPath(new URL("./app", import.meta.url)) } },
+  test: {
+    include: ["app/**/*.test.ts", "tests/integration/**/*.test.ts", "scripts/**/*.test.ts"],
+    environment: "node",
+    setupFiles: ["tests/setup/fail-on-console-error.ts"],
+    pool: "forks",
+  },
+});
