@@ -7,7 +7,9 @@ export default defineConfig({
   test: {
     include: ["app/**/*.test.ts", "tests/integration/**/*.test.ts", "scripts/**/*.test.ts"],
     environment: "node",
-    setupFiles: ["tests/setup/fail-on-console-error.ts"],
+    setupFiles: ["tests/setup/fail-on-console-error.ts", "tests/setup/temp-database.ts"],
     pool: "forks",
+    testTimeout: 20_000,
+    env: { TAKELINE_SCRYPT_LOG2N: "14" },
   },
 });

@@ -22,10 +22,11 @@ export function apiHandler<A extends { request: Request }>(fn: (args: A) => Prom
 
 /** Reads and validates a JSON body; throws the envelope for a missing, oversized, malformed or invalid body. */
 export async function readJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > MAX_JSON_BYTES) throw apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`);
+  // Answering before the body is read leaves its bytes on the socket: close the connection with the answer.
+  const tooLarge = () => apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`, undefined, { Connection: "close" });
+  if (Number(request.headers.get("content-length") ?? "0") > MAX_JSON_BYTES) throw tooLarge();
   const text = await request.text();
-  if (Buffer.byteLength(text) > MAX_JSON_BYTES) throw apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`);
+  if (Buffer.byteLength(text) > MAX_JSON_BYTES) throw tooLarge();
   let raw: unknown;
   try {
     raw = JSON.parse(text);
