@@ -1,0 +1,37 @@
+import type { Feature, MultiPolygon, Polygon } from "geojson";
+
+/** A parcel or footprint geometry: polygons with holes and multipolygons are kept whole. */
+export type AreaGeometry = Polygon | MultiPolygon;
+
+/** Attribute values as a reader found them (strings, numbers, booleans, dates as ISO text). */
+export type Properties = Record<string, string | number | boolean | null>;
+
+export type AreaFeature = Feature<AreaGeometry, Properties>;
+
+/** A source row that was left out, with its 1-based position in the layer. */
+export interface RejectedRow {
+  row: number;
+  reason: string;
+}
+
+/**
+ * What every reader returns. Coordinates are in the file's own CRS, untouched
+ * except for ring orientation (RFC 7946: exterior counter-clockwise, holes clockwise).
+ */
+export interface ReadResult {
+  features: AreaFeature[];
+  /** Attribute names in file order. */
+  fieldNames: string[];
+  /** The CRS the file declares, as WKT (Shapefile .prj, GeoPackage definition). */
+  sourceCrsWkt?: string;
+  /** The EPSG code the file declares (GeoPackage organization, GeoJSON legacy `crs`). */
+  sourceEpsg?: number;
+  rejected: RejectedRow[];
+  warnings: string[];
+}
+
+/** Options every reader accepts. */
+export interface ReadOptions {
+  /** Which layer to read when the file holds several. */
+  layer?: string;
+}
