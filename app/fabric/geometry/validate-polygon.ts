@@ -11,7 +11,6 @@ function ringProblem(ring: Position[]): string | null {
   }
   if (!samePoint(ring[0]!, ring[ring.length - 1]!)) return "ring is not closed (first and last points differ)";
   if (dedupe(ring).length < 4) return "ring has too few points (a ring needs at least 3 distinct corners)";
-  if (signedDoubleArea(dedupe(ring)) === 0) return "ring has zero area";
   return null;
 }
 
@@ -69,6 +68,8 @@ function polygonProblem(rings: Position[][]): string | null {
   const clean = rings.map(dedupe);
   const crossing = crossingProblem(clean);
   if (crossing) return crossing;
+  // After the crossing check, so a symmetric bow tie is called self-intersecting.
+  if (clean.some((r) => signedDoubleArea(r) === 0)) return "ring has zero area";
   const shell = clean[0]!;
   const holeOutside = clean.slice(1).findIndex((hole) => hole.some((p) => !insideRing(p, shell)));
   return holeOutside >= 0 ? `hole ${holeOutside + 1} lies outside the exterior ring` : null;
