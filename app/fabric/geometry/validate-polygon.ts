@@ -11,7 +11,13 @@ function ringProblem(ring: Position[]): string | null {
   }
   if (!samePoint(ring[0]!, ring[ring.length - 1]!)) return "ring is not closed (first and last points differ)";
   if (dedupe(ring).length < 4) return "ring has too few points (a ring needs at least 3 distinct corners)";
+  if (allOnOneLine(dedupe(ring))) return "ring has zero area (all points on one line)";
   return null;
+}
+
+function allOnOneLine(ring: Position[]): boolean {
+  const [a, b] = ring as [Position, Position];
+  return ring.every((p) => (b[0]! - a[0]!) * (p[1]! - a[1]!) === (b[1]! - a[1]!) * (p[0]! - a[0]!));
 }
 
 /** Drops consecutive repeated vertices (valid, but they make zero-length edges). */
@@ -68,7 +74,6 @@ function polygonProblem(rings: Position[][]): string | null {
   const clean = rings.map(dedupe);
   const crossing = crossingProblem(clean);
   if (crossing) return crossing;
-  // After the crossing check, so a symmetric bow tie is called self-intersecting.
   if (clean.some((r) => signedDoubleArea(r) === 0)) return "ring has zero area";
   const shell = clean[0]!;
   const holeOutside = clean.slice(1).findIndex((hole) => hole.some((p) => !insideRing(p, shell)));
