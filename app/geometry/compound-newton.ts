@@ -1,117 +1,125 @@
 import { evaluateCompoundCore } from "./compound-core";
-import { readKnown, residualOf, type Known } from "./compound-knowns";
+import { residualOf, type Known } from "./compound-knowns";
+import { buildReduction, type CompoundParams, type Reduction } from "./compound-reduction";
 import type { CompoundState } from "./compound-state";
 import { SOLVER_RESIDUAL_TOL } from "./tolerances";
 
-/** Parameters [R1, R2, Δ1 rad, Δ2 rad]. */
-export type CompoundParams = [number, number, number, number];
+export type { CompoundParams } from "./compound-reduction";
 
-const MAX_ITERATIONS = 60;
+const MAX_ITERATIONS = 80;
 const FD_STEP = 1e-7;
 const ACCEPT_RESIDUAL = 1e-10;
+const GRID_POINTS = [0, 240, 40, 14] as const;
+const MAX_STARTS = 16;
 
 /**
- * Damped Gauss–Newton (Levenberg–Marquardt) over x = (ln R1, ln R2, Δ1, Δ2) from a grid of starts
- * seeded with whatever the closed forms already fixed. Log radii keep radii positive; steps
- * leaving 0 < Δ1, Δ2 and Δ1 + Δ2 < π are rejected. Returns each converged root once (unverified).
+ * Numerical solve for what the closed forms left open: scan the free coordinates on a grid, keep
+ * the grid's local minima of the squared residual as starts, and polish each by damped
+ * Gauss–Newton (Levenberg–Marquardt) with a forward-difference Jacobian. Returns converged roots
+ * (not yet verified against the knowns; the caller does that).
  */
 export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): CompoundParams[] {
+  const red = buildReduction(seed, knowns);
+  const dims = red.bounds.length;
+  if (dims === 0) return red.solveFixedAngles();
   const roots: CompoundParams[] = [];
-  for (const start of buildStarts(knowns, seed)) {
-    const x = runLevenbergMarquardt(knowns, start);
-    if (x) roots.push([Math.exp(x[0]), Math.exp(x[1]), x[2], x[3]]);
+  for (const start of scanStarts(knowns, red)) {
+    const u = runLevenbergMarquardt(knowns, red, start);
+    const p = u && red.toParams(u);
+    if (p) roots.push(p);
   }
   return roots;
 }
 
-const TOTAL_GRID = Array.from({ length: 14 }, (_, i) => ((i + 0.5) / 14) * Math.PI);
-const SPLIT_GRID = Array.from({ length: 11 }, (_, i) => 0.04 + (0.92 * i) / 10);
-const RATIO_GRID = Array.from({ length: 9 }, (_, i) => 10 ** (-1 + i / 4));
-const MAX_STARTS = 8;
-
-/**
- * Coarse scan of (Δ, split of Δ, R2/R1) with the scale matched to one known length, keeping the
- * grid's local minima of the residual as starts; fixed parameters from the seed are not scanned.
- */
-function buildStarts(knowns: Known[], seed: CompoundState): [number, number, number, number][] {
-  const totals = seed.d !== undefined ? [seed.d] : seed.d1 !== undefined && seed.d2 !== undefined ? [seed.d1 + seed.d2] : TOTAL_GRID;
-  const splitFixed = seed.d1 !== undefined || seed.d2 !== undefined;
-  const ratios = seed.r1 !== undefined && seed.r2 !== undefined ? [seed.r2 / seed.r1] : RATIO_GRID;
-  const splits = splitFixed ? [0] : SPLIT_GRID;
-  const cells: { x: [number, number, number, number]; cost: number; key: [number, number, number] }[] = [];
-  totals.forEach((d, i) =>
-    splits.forEach((f, j) =>
-      ratios.forEach((rho, k) => {
-        const d1 = splitFixed ? (seed.d1 ?? d - seed.d2!) : f * d;
-        const x = scaleStart(knowns, seed, rho, d1, d - d1);
-        const r = residuals(knowns, x);
-        if (r) cells.push({ x, cost: sumSquares(r), key: [i, j, k] });
-      }),
-    ),
-  );
-  const costAt = new Map(cells.map((c) => [c.key.join(","), c.cost]));
-  const isLocalMin = (c: (typeof cells)[number]) =>
-    [-1, 0, 1].every((a) => [-1, 0, 1].every((b) => [-1, 0, 1].every((e) => {
-      const n = costAt.get([c.key[0] + a, c.key[1] + b, c.key[2] + e].join(","));
-      return n === undefined || n >= c.cost;
-    })));
-  return cells.filter(isLocalMin).sort((p, q) => p.cost - q.cost).slice(0, MAX_STARTS).map((c) => c.x);
-}
-
-function scaleStart(knowns: Known[], seed: CompoundState, rho: number, d1: number, d2: number): [number, number, number, number] {
-  let r1 = seed.r1 ?? (seed.r2 !== undefined ? seed.r2 / rho : undefined);
-  if (r1 === undefined) {
-    // Lengths are homogeneous of degree 1 in (R1, R2): scale a unit curve to the first length known.
-    const unit = evaluateCompoundCore(1, rho, d1, d2);
-    const first = knowns.find((k) => k.kind === "length");
-    r1 = first ? first.value / readKnown(unit, first.key) : 1;
-  }
-  const r2 = seed.r2 ?? rho * r1;
-  return [Math.log(r1), Math.log(r2), d1, d2];
-}
-
-function residuals(knowns: Known[], x: number[]): number[] | undefined {
-  const [a, b, d1, d2] = x as [number, number, number, number];
-  if (!(d1 > 0 && d2 > 0 && d1 + d2 < Math.PI)) return undefined;
-  const core = evaluateCompoundCore(Math.exp(a), Math.exp(b), d1, d2);
+function residuals(knowns: Known[], red: Reduction, u: number[]): number[] | undefined {
+  const p = red.toParams(u);
+  if (!p) return undefined;
+  const core = evaluateCompoundCore(...p);
   const r = knowns.map((k) => residualOf(core, k));
   return r.every(Number.isFinite) ? r : undefined;
 }
 
-function runLevenbergMarquardt(knowns: Known[], x0: [number, number, number, number]): [number, number, number, number] | undefined {
-  let x = x0;
-  let r = residuals(knowns, x);
-  if (!r) return undefined;
+function scanStarts(knowns: Known[], red: Reduction): number[][] {
+  const dims = red.bounds.length;
+  const n = GRID_POINTS[Math.min(dims, 3)]!;
+  const costs = new Map<number, number>();
+  const coord = (idx: number[]) => idx.map((k, d) => red.bounds[d]![0] + ((k + 0.5) / n) * (red.bounds[d]![1] - red.bounds[d]![0]));
+  const total = n ** dims;
+  for (let flat = 0; flat < total; flat++) {
+    const r = residuals(knowns, red, coord(unflatten(flat, n, dims)));
+    if (r) costs.set(flat, sumSquares(r));
+  }
+  const minima: [number, number][] = [];
+  for (const [flat, cost] of costs) {
+    const idx = unflatten(flat, n, dims);
+    if (neighbours(idx, n).every((f) => (costs.get(f) ?? Infinity) >= cost)) minima.push([flat, cost]);
+  }
+  return minima.sort((a, b) => a[1] - b[1]).slice(0, MAX_STARTS).map(([flat]) => coord(unflatten(flat, n, dims)));
+}
+
+function unflatten(flat: number, n: number, dims: number): number[] {
+  const idx: number[] = [];
+  for (let d = 0; d < dims; d++) {
+    idx.push(flat % n);
+    flat = Math.floor(flat / n);
+  }
+  return idx;
+}
+
+function neighbours(idx: number[], n: number): number[] {
+  const out: number[] = [];
+  const offsets = 3 ** idx.length;
+  for (let o = 0; o < offsets; o++) {
+    let flat = 0;
+    let mul = 1;
+    let self = true;
+    let inside = true;
+    for (let d = 0, rest = o; d < idx.length; d++, rest = Math.floor(rest / 3)) {
+      const k = idx[d]! + (rest % 3) - 1;
+      if (rest % 3 !== 1) self = false;
+      if (k < 0 || k >= n) inside = false;
+      flat += k * mul;
+      mul *= n;
+    }
+    if (!self && inside) out.push(flat);
+  }
+  return out;
+}
+
+function runLevenbergMarquardt(knowns: Known[], red: Reduction, u0: number[]): number[] | undefined {
+  let u: number[] = u0;
+  const r0 = residuals(knowns, red, u);
+  if (!r0) return undefined;
+  let r: number[] = r0;
   let cost = sumSquares(r);
   let lambda = 1e-3;
   for (let it = 0; it < MAX_ITERATIONS && maxAbs(r) > SOLVER_RESIDUAL_TOL; it++) {
-    const jac = jacobian(knowns, x, r);
-    if (!jac) return undefined;
-    const step = dampedStep(jac, r, lambda);
-    const next = step && (x.map((v, i) => v + step[i]!) as [number, number, number, number]);
-    const rNext = next && residuals(knowns, next);
+    const jac = jacobian(knowns, red, u, r);
+    const step: number[] | undefined = jac && dampedStep(jac, r, lambda);
+    const next: number[] | undefined = step && u.map((v, i) => v + step[i]!);
+    const rNext: number[] | undefined = next && residuals(knowns, red, next);
     if (next && rNext && sumSquares(rNext) < cost) {
-      [x, r, cost] = [next, rNext, sumSquares(rNext)];
+      [u, r, cost] = [next, rNext, sumSquares(rNext)];
       lambda = Math.max(lambda * 0.1, 1e-15);
     } else {
       lambda *= 10;
       if (lambda > 1e10) break;
     }
   }
-  return maxAbs(r) <= ACCEPT_RESIDUAL ? x : undefined;
+  return maxAbs(r) <= ACCEPT_RESIDUAL ? u : undefined;
 }
 
-function jacobian(knowns: Known[], x: number[], r: number[]): number[][] | undefined {
+function jacobian(knowns: Known[], red: Reduction, u: number[], r: number[]): number[][] | undefined {
   const cols: number[][] = [];
-  for (let j = 0; j < 4; j++) {
-    const xp = [...x];
-    xp[j]! += FD_STEP;
-    let rp = residuals(knowns, xp);
-    let h = FD_STEP;
+  for (let j = 0; j < u.length; j++) {
+    let h = FD_STEP * Math.max(1, Math.abs(u[j]!));
+    const up = [...u];
+    up[j]! += h;
+    let rp = residuals(knowns, red, up);
     if (!rp) {
-      xp[j]! -= 2 * FD_STEP;
-      rp = residuals(knowns, xp);
-      h = -FD_STEP;
+      up[j]! -= 2 * h;
+      h = -h;
+      rp = residuals(knowns, red, up);
     }
     if (!rp) return undefined;
     cols.push(rp.map((v, i) => (v - r[i]!) / h));
@@ -121,24 +129,26 @@ function jacobian(knowns: Known[], x: number[], r: number[]): number[][] | undef
 
 /** Solves (JᵀJ + λ·diag(JᵀJ)) δ = −Jᵀr by Gaussian elimination with partial pivoting. */
 function dampedStep(jac: number[][], r: number[], lambda: number): number[] | undefined {
-  const a = [0, 1, 2, 3].map((i) => [0, 1, 2, 3].map((j) => jac.reduce((s, row) => s + row[i]! * row[j]!, 0)));
-  const g = [0, 1, 2, 3].map((i) => -jac.reduce((s, row, k) => s + row[i]! * r[k]!, 0));
-  for (let i = 0; i < 4; i++) a[i]![i]! += lambda * Math.max(a[i]![i]!, 1e-12);
-  for (let c = 0; c < 4; c++) {
+  const k = jac[0]!.length;
+  const ids = [...Array(k).keys()];
+  const a = ids.map((i) => ids.map((j) => jac.reduce((s, row) => s + row[i]! * row[j]!, 0)));
+  const g = ids.map((i) => -jac.reduce((s, row, m) => s + row[i]! * r[m]!, 0));
+  for (const i of ids) a[i]![i]! += lambda * Math.max(a[i]![i]!, 1e-12);
+  for (let c = 0; c < k; c++) {
     let p = c;
-    for (let i = c + 1; i < 4; i++) if (Math.abs(a[i]![c]!) > Math.abs(a[p]![c]!)) p = i;
+    for (let i = c + 1; i < k; i++) if (Math.abs(a[i]![c]!) > Math.abs(a[p]![c]!)) p = i;
     if (a[p]![c] === 0) return undefined;
     [a[c], a[p], g[c], g[p]] = [a[p]!, a[c]!, g[p]!, g[c]!];
-    for (let i = c + 1; i < 4; i++) {
+    for (let i = c + 1; i < k; i++) {
       const f = a[i]![c]! / a[c]![c]!;
-      for (let k = c; k < 4; k++) a[i]![k]! -= f * a[c]![k]!;
+      for (let m = c; m < k; m++) a[i]![m]! -= f * a[c]![m]!;
       g[i]! -= f * g[c]!;
     }
   }
-  const out = [0, 0, 0, 0];
-  for (let i = 3; i >= 0; i--) {
+  const out = new Array<number>(k).fill(0);
+  for (let i = k - 1; i >= 0; i--) {
     let s = g[i]!;
-    for (let k = i + 1; k < 4; k++) s -= a[i]![k]! * out[k]!;
+    for (let m = i + 1; m < k; m++) s -= a[i]![m]! * out[m]!;
     out[i] = s / a[i]![i]!;
   }
   return out.every(Number.isFinite) ? out : undefined;

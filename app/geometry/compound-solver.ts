@@ -3,6 +3,7 @@ import { toCompoundCurve, type CompoundCurve, type CompoundStationInput } from "
 import { describeNoSolution } from "./compound-diagnose";
 import { knownHolds, parseCompoundGiven, type CompoundGiven, type Known } from "./compound-knowns";
 import { solveCompoundNumerically, type CompoundParams } from "./compound-newton";
+import { polishCompoundRoot } from "./compound-polish";
 import { propagateCompound } from "./compound-propagate";
 import { selectIndependentKnowns } from "./compound-rank";
 import { isComplete, stateFromKnowns } from "./compound-state";
@@ -29,7 +30,7 @@ export function solveCompoundCurve(given: CompoundGiven, stations: CompoundStati
   const knowns = parseCompoundGiven(given);
   const { chosen, rank } = selectIndependentKnowns(knowns);
   if (rank < 4) throw missingKnowns(knowns, rank);
-  const roots = dedupeRoots(findRoots(chosen));
+  const roots = dedupeRoots(findRoots(chosen).map((p) => polishCompoundRoot(chosen, p)).filter(isValidParams));
   const fitting = roots.map((p) => evaluateCompoundCore(...p)).filter((core) => chosen.every((k) => knownHolds(core, k)));
   if (fitting.length === 0) throw describeNoSolution(chosen);
   const agreeing = fitting.filter((core) => knowns.every((k) => knownHolds(core, k)));

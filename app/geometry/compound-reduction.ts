@@ -1,0 +1,146 @@
+import { evaluateCompoundCore } from "./compound-core";
+import { readKnown, type Known } from "./compound-knowns";
+import type { CompoundState } from "./compound-state";
+import { crossVec, unitAtRad } from "./vec2";
+
+/** Parameters [R1, R2, Δ1 rad, Δ2 rad]. */
+export type CompoundParams = [number, number, number, number];
+
+/** The unknowns left after the closed forms: free angle coordinates mapped to full parameters. */
+export interface Reduction {
+  /** Range of each free angle coordinate (radians), for the starting-point scan. */
+  bounds: [number, number][];
+  /** Parameters for a point of the free coordinates; undefined where no valid radii exist. */
+  toParams(u: number[]): CompoundParams | undefined;
+  /** Every solution when no angle is free (the long chord can give two). */
+  solveFixedAngles(): CompoundParams[];
+}
+
+const PURE_ANGLE_KEYS = new Set(["delta", "delta1", "delta2"]);
+
+/**
+ * Variable projection. With Δ1, Δ2 fixed every length of the curve is linear in (R1, R2) and a
+ * chord angle (or the parallel condition) is a homogeneous linear condition on them, so for each
+ * trial of the free angles the radii come from a small linear least-squares solve; only the
+ * angles (at most two) are searched. Angles known from the seed are not free.
+ */
+export function buildReduction(seed: CompoundState, knowns: Known[]): Reduction {
+  const angle = angleMapping(seed);
+  const others = knowns.filter((k) => !PURE_ANGLE_KEYS.has(k.key));
+  return {
+    bounds: angle.bounds,
+    toParams(u) {
+      const [d1, d2] = angle.map(u);
+      if (!(d1 > 0 && d2 > 0 && d1 + d2 < Math.PI)) return undefined;
+      const radii = seed.r1 !== undefined && seed.r2 !== undefined ? [seed.r1, seed.r2] : solveRadii(others, d1, d2);
+      if (!radii) return undefined;
+      const [r1, r2] = radii as [number, number];
+      return r1 > 0 && r2 > 0 && Number.isFinite(r1) && Number.isFinite(r2) ? [r1, r2, d1, d2] : undefined;
+    },
+    solveFixedAngles() {
+      const [d1, d2] = angle.map([]);
+      const viaChord = solveRadiiWithChord(others, d1, d2);
+      if (viaChord) return viaChord.map(([r1, r2]) => [r1, r2, d1, d2] as CompoundParams);
+      const p = this.toParams([]);
+      return p ? [p] : [];
+    },
+  };
+}
+
+interface AngleMapping {
+  bounds: [number, number][];
+  map(u: number[]): [number, number];
+}
+
+function angleMapping(seed: CompoundState): AngleMapping {
+  const { d, d1, d2 } = seed;
+  if (d1 !== undefined && d2 !== undefined) return { bounds: [], map: () => [d1, d2] };
+  if (d1 !== undefined) return { bounds: [[0, Math.PI - d1]], map: (u) => [d1, u[0]!] };
+  if (d2 !== undefined) return { bounds: [[0, Math.PI - d2]], map: (u) => [u[0]!, d2] };
+  if (d !== undefined) return { bounds: [[0, d]], map: (u) => [u[0]!, d - u[0]!] };
+  return { bounds: [[0, Math.PI], [0, Math.PI]], map: (u) => [u[0]!, u[1]!] };
+}
+
+/** Linear rows a·R1 + b·R2 = c from the knowns at fixed angles (the long chord is kept aside). */
+function linearRows(knowns: Known[], d1: number, d2: number): { rows: [number, number, number][]; chord?: number } {
+  const u1 = evaluateCompoundCore(1, 0, d1, d2);
+  const u2 = evaluateCompoundCore(0, 1, d1, d2);
+  const rows: [number, number, number][] = [];
+  let chord: number | undefined;
+  for (const k of knowns) {
+    if (k.key === "longChord") chord = k.value;
+    else if (k.kind === "length") rows.push([readKnown(u1, k.key) / k.value, readKnown(u2, k.key) / k.value, 1]);
+    else {
+      const phi = k.key === "chordAnglePC" ? k.value : k.key === "chordAnglePT" ? d1 + d2 - k.value : d1;
+      const dir = unitAtRad(phi);
+      const [a, b] = [crossVec(u1.pt, dir), crossVec(u2.pt, dir)];
+      const n = Math.hypot(a, b) || 1;
+      rows.push([a / n, b / n, 0]);
+    }
+  }
+  const distinct = dropParallelRows(rows);
+  if (chord !== undefined && distinct.length < 2) distinct.push(...chordRowsFor(distinct[0], u1.pt, u2.pt, chord));
+  return chord === undefined ? { rows: distinct } : { rows: distinct, chord };
+}
+
+/** Rows that say the same thing (R1 and t1 both given, say) would make the solve singular. */
+function dropParallelRows(rows: [number, number, number][]): [number, number, number][] {
+  const out: [number, number, number][] = [];
+  for (const r of rows) {
+    const parallel = out.some((q) => Math.abs(r[0] * q[1] - r[1] * q[0]) <= 1e-12 * Math.hypot(r[0], r[1]) * Math.hypot(q[0], q[1]));
+    if (!parallel) out.push(r);
+  }
+  return out;
+}
+
+/** With a single linear row left, the long chord fixes the scale along it (one homogeneous row). */
+function chordRowsFor(row: [number, number, number] | undefined, p1: [number, number], p2: [number, number], lc: number): [number, number, number][] {
+  if (!row || row[2] !== 0) return [];
+  const [a, b] = row;
+  const v: [number, number] = [b * p1[0] - a * p2[0], b * p1[1] - a * p2[1]];
+  const k = lc / Math.hypot(v[0], v[1]);
+  return [[1, 0, b * k * Math.sign(b || 1)], [0, 1, -a * k * Math.sign(b || 1)]];
+}
+
+/**
+ * One inhomogeneous linear row plus the long chord: R = R0 + t·n along the row's null direction
+ * and |PT(R)| = LC is a quadratic in t, so up to two radius pairs. Undefined if not that case.
+ */
+function solveRadiiWithChord(knowns: Known[], d1: number, d2: number): [number, number][] | undefined {
+  const { rows, chord } = linearRows(knowns, d1, d2);
+  const row = rows[0];
+  if (chord === undefined || rows.length !== 1 || !row || row[2] === 0) return undefined;
+  const u1 = evaluateCompoundCore(1, 0, d1, d2).pt;
+  const u2 = evaluateCompoundCore(0, 1, d1, d2).pt;
+  const [a, b, c] = row;
+  const r0: [number, number] = [(c * a) / (a * a + b * b), (c * b) / (a * a + b * b)];
+  const n: [number, number] = [-b, a];
+  const p0 = [r0[0] * u1[0] + r0[1] * u2[0], r0[0] * u1[1] + r0[1] * u2[1]] as const;
+  const pn = [n[0] * u1[0] + n[1] * u2[0], n[0] * u1[1] + n[1] * u2[1]] as const;
+  const qa = pn[0] * pn[0] + pn[1] * pn[1];
+  const qb = 2 * (p0[0] * pn[0] + p0[1] * pn[1]);
+  const qc = p0[0] * p0[0] + p0[1] * p0[1] - chord * chord;
+  const disc = qb * qb - 4 * qa * qc;
+  if (!(disc >= 0) || qa === 0) return [];
+  const sq = Math.sqrt(disc);
+  // Numerically stable pair of roots.
+  const q = -0.5 * (qb + Math.sign(qb || 1) * sq);
+  const ts = q === 0 ? [0] : [q / qa, qc / q];
+  return ts.map((t) => [r0[0] + t * n[0], r0[1] + t * n[1]]);
+}
+
+function solveRadii(knowns: Known[], d1: number, d2: number): [number, number] | undefined {
+  const { rows } = linearRows(knowns, d1, d2);
+  // Normal equations of the 2-unknown least-squares problem.
+  let [s11, s12, s22, g1, g2] = [0, 0, 0, 0, 0];
+  for (const [a, b, c] of rows) {
+    s11 += a * a;
+    s12 += a * b;
+    s22 += b * b;
+    g1 += a * c;
+    g2 += b * c;
+  }
+  const det = s11 * s22 - s12 * s12;
+  if (!(Math.abs(det) > 1e-14 * Math.max(s11 * s22, 1e-300))) return undefined;
+  return [(g1 * s22 - g2 * s12) / det, (s11 * g2 - s12 * g1) / det];
+}
