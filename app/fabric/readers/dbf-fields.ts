@@ -1,0 +1,33 @@
+/**
+ * The WHATWG encoding label for a .cpg file's text: "UTF-8", "ISO-8859-1",
+ * "windows-1252" pass through; bare code pages ("1252", "ANSI 1252") become
+ * "windows-NNNN". Undefined means UTF-8 (GDAL's default for new files).
+ */
+export function encodingFromCpg(cpg: string | undefined): string | undefined {
+  const text = cpg?.trim();
+  if (!text) return undefined;
+  const codePage = /^(?:ANSI\s*)?(\d{3,4})$/i.exec(text);
+  const label = codePage ? `windows-${codePage[1]}` : text;
+  try {
+    new TextDecoder(label);
+    return label;
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Field names of a dBASE file in their stored order (the descriptors after the
+ * 32-byte header, each 32 bytes, ended by 0x0D). Needed because a layer with
+ * no rows still has fields to map.
+ */
+export function readDbfFieldNames(dbf: Uint8Array, encoding?: string): string[] {
+  const decoder = new TextDecoder(encoding ?? "utf-8");
+  const names: string[] = [];
+  for (let offset = 32; offset + 32 <= dbf.byteLength && dbf[offset] !== 0x0d; offset += 32) {
+    const raw = dbf.subarray(offset, offset + 11);
+    const end = raw.indexOf(0);
+    names.push(decoder.decode(end >= 0 ? raw.subarray(0, end) : raw).trim());
+  }
+  return names;
+}
