@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import { GeometryInputError } from "~/geometry/errors";
 import { apiError, zodDetails } from "./api-error.server";
 
 /** Largest JSON body the API accepts; uploads have their own limit. */
@@ -6,7 +7,8 @@ export const MAX_JSON_BYTES = 1024 * 1024;
 
 /**
  * Wraps an API loader or action so that any failure becomes the JSON error envelope:
- * thrown Responses pass through, anything else is logged and answered with a bare 500.
+ * thrown Responses pass through, geometry input errors become 422, anything else is logged and
+ * answered with a bare 500.
  */
 export function apiHandler<A extends { request: Request }>(fn: (args: A) => Promise<Response> | Response) {
   return async (args: A): Promise<Response> => {
@@ -14,6 +16,8 @@ export function apiHandler<A extends { request: Request }>(fn: (args: A) => Prom
       return await fn(args);
     } catch (error) {
       if (error instanceof Response) return error;
+      // Bad survey input is the client's to fix: say exactly what, with the engine's own code.
+      if (error instanceof GeometryInputError) return Response.json({ error: error.toJSON() }, { status: 422 });
       console.error("API error", error);
       return apiError("internal", "Something went wrong on the server; the request was not completed.");
     }
