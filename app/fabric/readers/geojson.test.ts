@@ -1,0 +1,68 @@
+import { readFileSync } from "node:fs";
+import { expect, test } from "vitest";
+import { readGeoJson } from "./geojson";
+import { ogrFromRows, tempDir } from "../test-support/reference-tools.server";
+import { QUILLMERE_ROWS } from "../test-support/quillmere-parcels";
+import { isFabricInputError } from "../errors";
+import { signedDoubleArea } from "../geometry/ring-orientation";
+
+/** GeoJSON written by GDAL's ogr2ogr (reference writer) from the Quillmere rows. */
+function gdalGeoJson(extra: string[] = []): Uint8Array {
+  const { dir, cleanup } = tempDir();
+  try {
+    return readFileSync(ogrFromRows(dir, { rows: QUILLMERE_ROWS, driver: "GeoJSON", out: "parcels.geojson", srs: "EPSG:2229", extra }));
+  } finally {
+    cleanup();
+  }
+}
+
+const utf8 = (o: unknown) => new TextEncoder().encode(JSON.stringify(o));
+
+test("reads GDAL's GeoJSON: legacy crs member gives the EPSG code, feature ids are kept", () => {
+  const r = readGeoJson(gdalGeoJson(["-lco", "ID_FIELD=APN"]));
+  expect(r.sourceEpsg).toBe(2229);
+  expect(r.features.map((f) => f.id)).toEqual(["QM-001", "QM-002", "QM-004"]);
+  expect(r.rejected.map((x) => x.row)).toEqual([3, 5]);
+  expect(r.fieldNames).toEqual(expect.arrayContaining(["OWNER_NM", "SITUS", "LU", "LAND_VAL"]));
+});
+
+test("RFC 7946 winding is applied: clockwise exteriors are turned counter-clockwise", () => {
+  const cw = [[0, 0], [0, 1], [1, 1], [1, 0], [0, 0]];
+  const r = readGeoJson(utf8({ type: "FeatureCollection", features: [{ type: "Feature", id: 7, properties: { PIN: "Q-7" }, geometry: { type: "Polygon", coordinates: [cw] } }] }));
+  expect(signedDoubleArea(r.features[0]!.geometry.coordinates[0] as number[][])).toBeGreaterThan(0);
+  expect(r.features[0]!.id).toBe(7);
+  expect(r.sourceEpsg).toBeUndefined();
+});
+
+test("non-polygon, empty and malformed features are rejected by row", () => {
+  const features = [
+    { type: "Feature", properties: {}, geometry: { type: "Point", coordinates: [0, 0] } },
+    { type: "Feature", properties: {}, geometry: { type: "Polygon", coordinates: [] } },
+    { type: "Feature", properties: {}, geometry: { type: "Polygon", coordinates: [[[0, 0], [1, 0], [1, 1]]] } },
+    { type: "Feature", properties: {}, geometry: null },
+  ];
+  const r = readGeoJson(utf8({ type: "FeatureCollection", features }));
+  expect(r.rejected).toEqual([
+    { row: 1, reason: "not a polygon (Point)" },
+    { row: 2, reason: "empty geometry" },
+    { row: 3, reason: expect.stringMatching(/not closed/) },
+    { row: 4, reason: "no geometry" },
+  ]);
+});
+
+test("a crs member that names no EPSG code is ignored with a warning", () => {
+  const r = readGeoJson(utf8({ type: "FeatureCollection", crs: { type: "link", properties: { href: "x.prj" } }, features: [] }));
+  expect(r.sourceEpsg).toBeUndefined();
+  expect(r.warnings.join(" ")).toMatch(/names no EPSG code/);
+});
+
+test("bad JSON and non-collections raise typed errors", () => {
+  expect(() => readGeoJson(new TextEncoder().encode("{oops"))).toThrow(/not valid JSON/);
+  let caught: unknown;
+  try {
+    readGeoJson(utf8({ type: "Polygon", coordinates: [] }));
+  } catch (e) {
+    caught = e;
+  }
+  expect(isFabricInputError(caught, "unsupported_format")).toBe(true);
+});
