@@ -22,6 +22,7 @@ export default [
     route("invitations", "routes/api.v1.invitations.ts"),
     route("curves/simple", "routes/api.v1.curves.simple.ts"),
     route("curves/compound", "routes/api.v1.curves.compound.ts"),
+    route("alignments/geometry", "routes/api.v1.alignments.geometry.ts"),
   ]),
   route("api/*", "routes/api.not-found.ts"),
   route("*", "routes/not-found.tsx"),
