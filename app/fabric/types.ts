@@ -6,7 +6,11 @@ export type AreaGeometry = Polygon | MultiPolygon;
 /** Attribute values as a reader found them (strings, numbers, booleans, dates as ISO text). */
 export type Properties = Record<string, string | number | boolean | null>;
 
-export type AreaFeature = Feature<AreaGeometry, Properties>;
+/**
+ * A parcel as read. `sourceRow` (a GeoJSON foreign member) is its 1-based
+ * row in the source layer, so later checks can report the row a planner sees.
+ */
+export type AreaFeature = Feature<AreaGeometry, Properties> & { sourceRow: number };
 
 /** A source row that was left out, with its 1-based position in the layer. */
 export interface RejectedRow {

@@ -78,7 +78,12 @@ export function collectFeatures(rows: RawRow[]): CollectedRows {
       return;
     }
     if (area.hadZ) zRows++;
-    const feature: AreaFeature = { type: "Feature", geometry: normalizeOrientation(area.geometry), properties: cleanProperties(r.properties) };
+    const feature: AreaFeature = {
+      type: "Feature",
+      geometry: normalizeOrientation(area.geometry),
+      properties: cleanProperties(r.properties),
+      sourceRow: i + 1,
+    };
     if (r.id !== undefined) feature.id = r.id;
     features.push(feature);
   });
