@@ -3,6 +3,7 @@
  * Idempotent; honours PORT (default 3000), DATABASE_URL and MAIL_DIR.
  */
 import { spawn, spawnSync } from "node:child_process";
+import { join } from "node:path";
 
 process.env.TAKELINE_DEMO = "1";
 process.env.NODE_ENV = "production";
@@ -15,7 +16,8 @@ const { seedDemo } = await import("../app/models/demo-seed.server");
 const seeded = await seedDemo();
 console.log(`Demo scenario ready: ${seeded.users} accounts, project #${seeded.projectId}.`);
 
-const server = spawn("npx", ["react-router-serve", "./build/server/index.js"], {
+// The server's own binary rather than npx, so signals reach it directly.
+const server = spawn(join("node_modules", ".bin", "react-router-serve"), ["./build/server/index.js"], {
   stdio: ["ignore", "pipe", "inherit"],
   env: { ...process.env, PORT: port },
 });

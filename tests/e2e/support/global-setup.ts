@@ -57,7 +57,8 @@ export default async function setup(project: TestProject) {
   const seeded = spawnSync("npx", ["tsx", "scripts/seed-demo.ts"], { env, encoding: "utf8" });
   if (seeded.status !== 0) throw new Error(`demo seed failed:\n${seeded.stdout}\n${seeded.stderr}`);
   let output = "";
-  const child = spawn("npx", ["react-router-serve", "./build/server/index.js"], { env, stdio: ["ignore", "pipe", "pipe"] });
+  // The server's own binary, not npx: killing npx would leave the server running.
+  const child = spawn(join("node_modules", ".bin", "react-router-serve"), ["./build/server/index.js"], { env, stdio: ["ignore", "pipe", "pipe"] });
   child.stdout?.on("data", (c: Buffer) => (output += c.toString()));
   child.stderr?.on("data", (c: Buffer) => (output += c.toString()));
   const baseUrl = `http://127.0.0.1:${port}`;
@@ -65,8 +66,11 @@ export default async function setup(project: TestProject) {
   project.provide("baseUrl", baseUrl);
   project.provide("mailDir", env.MAIL_DIR);
   return async () => {
-    child.kill("SIGTERM");
-    await new Promise((r) => child.once("exit", r));
+    if (child.exitCode === null) {
+      const exited = new Promise((r) => child.once("exit", r));
+      child.kill("SIGTERM");
+      await exited;
+    }
     rmSync(dir, { recursive: true, force: true });
   };
 }
