@@ -4,11 +4,13 @@ export type FabricErrorCode =
   | "corrupt_file"
   | "missing_crs"
   | "unknown_crs"
+  | "coordinates_outside_crs"
   | "geographic_working_crs"
   | "no_polygon_layer"
   | "too_many_layers"
   | "empty_layer"
   | "missing_parcel_id_field"
+  | "unknown_field"
   | "reprojection_failed";
 
 /**

@@ -17,6 +17,22 @@ export function encodingFromCpg(cpg: string | undefined): string | undefined {
 }
 
 /**
+ * Code pages named by the dBASE header's language driver ID (byte 29), for
+ * files without a .cpg. GDAL writes 0x57 (its default ISO-8859-1); WHATWG
+ * decodes ISO-8859-1 as windows-1252, a superset for printable text.
+ */
+const LDID_ENCODINGS: Record<number, string> = {
+  0x03: "windows-1252", 0x57: "windows-1252", 0x58: "windows-1252", 0x59: "windows-1252",
+  0x13: "shift_jis", 0x4d: "gbk", 0x4e: "euc-kr", 0x4f: "big5",
+  0x64: "ibm866", 0x65: "ibm866", 0xc8: "windows-1250", 0xc9: "windows-1251", 0xca: "windows-1254", 0xcb: "windows-1253",
+};
+
+/** The encoding a .dbf's language driver ID names, or undefined (then UTF-8). */
+export function encodingFromLdid(dbf: Uint8Array): string | undefined {
+  return dbf.byteLength > 29 ? LDID_ENCODINGS[dbf[29]!] : undefined;
+}
+
+/**
  * Field names of a dBASE file in their stored order (the descriptors after the
  * 32-byte header, each 32 bytes, ended by 0x0D). Needed because a layer with
  * no rows still has fields to map.

@@ -63,6 +63,15 @@ test("the .cpg encoding is honoured for attribute text", async () => {
   expect(r.features.find((f) => f.properties.APN === "QM-004")!.properties.OWNER_NM).toBe("Åsa Ørnvik-Dalby");
 });
 
+test("without a .cpg, the dBASE language driver ID picks the encoding", async () => {
+  // GDAL writes no .cpg by default, only language driver 0x57 (ISO-8859-1) in the .dbf header.
+  const { bytes, files } = shapefileZip();
+  expect(files.some((f) => f.endsWith(".cpg"))).toBe(false);
+  const r = await readShapefileZip(bytes);
+  expect(r.features.find((f) => f.properties.APN === "QM-004")!.properties.OWNER_NM).toBe("Åsa Ørnvik-Dalby");
+  expect(r.warnings).toEqual([]);
+});
+
 test("a point or line layer is refused with no_polygon_layer", async () => {
   for (const wkt of ["POINT (6487000 1840000)", "LINESTRING (6487000 1840000, 6487100 1840050)"]) {
     const { bytes } = shapefileZip({ rows: [{ wkt, APN: "QM-900" }] });

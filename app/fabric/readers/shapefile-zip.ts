@@ -4,7 +4,7 @@ import { FabricInputError } from "../errors";
 import type { ReadOptions, ReadResult } from "../types";
 import { collectFeatures, type RawRow } from "./collect-features";
 import { readZipEntries, sidecar, type ZipEntries } from "./zip-entries";
-import { encodingFromCpg, readDbfFieldNames } from "./dbf-fields";
+import { encodingFromCpg, encodingFromLdid, readDbfFieldNames } from "./dbf-fields";
 
 /** Shapefile shape types (ESRI Shapefile Technical Description, 1998, table 1). */
 const POLYGON_TYPES = new Set([5, 15, 25]);
@@ -45,12 +45,13 @@ function readAttributes(dbf: Uint8Array | undefined, cpgText: string | undefined
     warnings.push("The Shapefile has no .dbf, so its parcels have no attributes.");
     return { rows: new Array<Record<string, unknown>>(count).fill({}), fieldNames: [] as string[] };
   }
-  const cpg = encodingFromCpg(cpgText);
-  if (cpgText && !cpg) warnings.push(`The .cpg names an unknown encoding ("${cpgText}"); text was read as UTF-8.`);
+  // Encoding: the .cpg if present, else the header's language driver ID, else UTF-8.
+  const cpg = encodingFromCpg(cpgText) ?? (cpgText ? undefined : encodingFromLdid(dbf));
+  if (cpgText && !encodingFromCpg(cpgText)) warnings.push(`The .cpg names an unknown encoding ("${cpgText}"); text was read as UTF-8.`);
   // parsedbf decodes text with this label (UTF-8 without one), so the .cpg is honoured.
   const rows = parseDbf(asView(dbf) as never, cpg as never) as Record<string, unknown>[];
   if (rows.length !== count) warnings.push(`The .shp has ${count} shapes but the .dbf has ${rows.length} rows; rows were paired in order.`);
-  if (!cpgText && rows.some((r) => Object.values(r).some((v) => typeof v === "string" && v.includes("\uFFFD")))) {
+  if (!cpg && rows.some((r) => Object.values(r).some((v) => typeof v === "string" && v.includes("\uFFFD")))) {
     warnings.push("Some text is not valid UTF-8 and there is no .cpg naming the encoding; add a .cpg (e.g. 'windows-1252').");
   }
   return { rows, fieldNames: readDbfFieldNames(dbf, cpg) };
