@@ -47,3 +47,22 @@ export function readDbfFieldNames(dbf: Uint8Array, encoding?: string): string[] 
   }
   return names;
 }
+
+/**
+ * 0-based indexes of records flagged deleted ("*" in a record's first byte,
+ * dBASE III layout: record count at byte 4, header and record lengths at 8
+ * and 10). The shape is still in the .shp, so readers must skip them.
+ */
+export function deletedDbfRecords(dbf: Uint8Array): Set<number> {
+  const deleted = new Set<number>();
+  if (dbf.byteLength < 12) return deleted;
+  const view = new DataView(dbf.buffer, dbf.byteOffset, dbf.byteLength);
+  const count = view.getUint32(4, true);
+  const headerLength = view.getUint16(8, true);
+  const recordLength = view.getUint16(10, true);
+  for (let i = 0; i < count; i++) {
+    const at = headerLength + i * recordLength;
+    if (at < dbf.byteLength && dbf[at] === 0x2a) deleted.add(i);
+  }
+  return deleted;
+}

@@ -54,9 +54,10 @@ function openReadOnly(path: string): Db {
 export function readGeoPackage(bytes: Uint8Array, options: ReadOptions = {}): ReadResult {
   const dir = mkdtempSync(join(tmpdir(), "takeline-gpkg-"));
   const path = join(dir, "upload.gpkg");
-  writeFileSync(path, bytes);
-  const db = openReadOnly(path);
+  let db: Db | undefined;
   try {
+    writeFileSync(path, bytes);
+    db = openReadOnly(path);
     const warnings: string[] = [];
     const layer = pickGpkgLayer(db, options, warnings);
     const { pk, fields } = attributeColumns(db, layer);
@@ -66,7 +67,7 @@ export function readGeoPackage(bytes: Uint8Array, options: ReadOptions = {}): Re
     Object.assign(result, readGpkgSrs(db, layer.srsId));
     return result;
   } finally {
-    db.close();
+    db?.close();
     rmSync(dir, { recursive: true, force: true });
   }
 }

@@ -1,5 +1,5 @@
 import { execFileSync } from "node:child_process";
-import { readFileSync, readdirSync } from "node:fs";
+import { readFileSync, readdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { expect, test } from "vitest";
 import { readShapefileZip } from "./shapefile-zip";
@@ -72,6 +72,23 @@ test("without a .cpg, the dBASE language driver ID picks the encoding", async ()
   expect(r.warnings).toEqual([]);
 });
 
+test("records flagged deleted in the .dbf are rejected, not read as parcels", async () => {
+  const { dir, cleanup } = tempDir();
+  try {
+    ogrFromRows(dir, { rows: QUILLMERE_ROWS, driver: "ESRI Shapefile", out: "parcels.shp", srs: "EPSG:2229", layer: "parcels" });
+    const dbfPath = join(dir, "parcels.dbf");
+    const dbf = readFileSync(dbfPath);
+    // Flag record 2 (QM-002) deleted, as a dBASE editor would: "*" in its first byte.
+    dbf[dbf.readUInt16LE(8) + dbf.readUInt16LE(10)] = 0x2a;
+    writeFileSync(dbfPath, dbf);
+    const r = await readShapefileZip(zipFiles(["shp", "shx", "dbf", "prj"].map((e) => join(dir, `parcels.${e}`))));
+    expect(r.features.map((f) => f.properties.APN)).toEqual(["QM-001", "QM-004"]);
+    expect(r.rejected).toContainEqual({ row: 2, reason: "record is marked deleted in the .dbf" });
+  } finally {
+    cleanup();
+  }
+});
+
 test("a point or line layer is refused with no_polygon_layer", async () => {
   for (const wkt of ["POINT (6487000 1840000)", "LINESTRING (6487000 1840000, 6487100 1840050)"]) {
     const { bytes } = shapefileZip({ rows: [{ wkt, APN: "QM-900" }] });
@@ -81,7 +98,7 @@ test("a point or line layer is refused with no_polygon_layer", async () => {
   }
 });
 
-test("several layers in one zip are refused unless one is named", async () => {
+test("several polygon layers in one zip are refused unless one is named; a lone polygon layer is picked", async () => {
   const { dir, cleanup } = tempDir();
   try {
     ogrFromRows(dir, { rows: QUILLMERE_ROWS, driver: "ESRI Shapefile", out: "parcels.shp", srs: "EPSG:2229", layer: "parcels" });
@@ -91,6 +108,11 @@ test("several layers in one zip are refused unless one is named", async () => {
     expect(isFabricInputError(e, "too_many_layers")).toBe(true);
     expect((e as { details: { layers: string[] } }).details.layers.sort()).toEqual(["easements", "parcels"]);
     expect((await readShapefileZip(bytes, { layer: "easements" })).features).toHaveLength(1);
+    ogrFromRows(dir, { rows: [{ wkt: "POINT (6487000 1840000)", APN: "M-1" }], driver: "ESRI Shapefile", out: "marks.shp", srs: "EPSG:2229", layer: "marks" });
+    const withPoints = zipFiles(readdirSync(dir).filter((f) => /^(parcels|marks)\./.test(f) && !/\.csvt?$/.test(f)).map((f) => join(dir, f)));
+    const picked = await readShapefileZip(withPoints);
+    expect(picked.features).toHaveLength(3);
+    expect(picked.warnings.join(" ")).toMatch(/ignored non-polygon layers: marks/);
   } finally {
     cleanup();
   }

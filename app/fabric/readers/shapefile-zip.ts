@@ -4,15 +4,25 @@ import { FabricInputError } from "../errors";
 import type { ReadOptions, ReadResult } from "../types";
 import { collectFeatures, type RawRow } from "./collect-features";
 import { readZipEntries, sidecar, type ZipEntries } from "./zip-entries";
-import { encodingFromCpg, encodingFromLdid, readDbfFieldNames } from "./dbf-fields";
+import { deletedDbfRecords, encodingFromCpg, encodingFromLdid, readDbfFieldNames } from "./dbf-fields";
 
 /** Shapefile shape types (ESRI Shapefile Technical Description, 1998, table 1). */
 const POLYGON_TYPES = new Set([5, 15, 25]);
 const TYPE_NAMES: Record<number, string> = { 0: "null shapes", 1: "points", 3: "lines", 8: "multipoints", 11: "points", 13: "lines", 18: "multipoints", 21: "points", 23: "lines", 28: "multipoints", 31: "multipatches" };
 
-function pickLayer(entries: ZipEntries, options: ReadOptions): string {
+function shapeTypeOf(shp: Uint8Array | undefined): number | null {
+  return shp && shp.byteLength >= 100 ? new DataView(shp.buffer, shp.byteOffset, shp.byteLength).getInt32(32, true) : null;
+}
+
+/**
+ * The layer to read: the named one, the only one, or the only polygon layer
+ * among several (others ignored with a warning, as zips often carry a
+ * centreline or survey points too).
+ */
+function pickLayer(entries: ZipEntries, options: ReadOptions, warnings: string[]): string {
   const bases = [...entries.keys()].filter((n) => n.toLowerCase().endsWith(".shp")).map((n) => n.slice(0, -4));
-  const names = bases.map((b) => b.split("/").pop()!);
+  const nameOf = (b: string) => b.split("/").pop()!;
+  const names = bases.map(nameOf);
   if (bases.length === 0) {
     throw new FabricInputError("no_polygon_layer", "The zip holds no Shapefile (.shp).", { files: [...entries.keys()] });
   }
@@ -21,10 +31,14 @@ function pickLayer(entries: ZipEntries, options: ReadOptions): string {
     if (i < 0) throw new FabricInputError("no_polygon_layer", `The zip has no layer named "${options.layer}".`, { layers: names });
     return bases[i]!;
   }
-  if (bases.length > 1) {
-    throw new FabricInputError("too_many_layers", `The zip holds ${bases.length} Shapefiles (${names.join(", ")}); upload one, or name the layer to read.`, { layers: names });
+  if (bases.length === 1) return bases[0]!;
+  const polygons = bases.filter((b) => POLYGON_TYPES.has(shapeTypeOf(sidecar(entries, b, ".shp")) ?? -1));
+  if (polygons.length === 1) {
+    warnings.push(`Read layer "${nameOf(polygons[0]!)}"; ignored non-polygon layers: ${names.filter((n) => n !== nameOf(polygons[0]!)).join(", ")}.`);
+    return polygons[0]!;
   }
-  return bases[0]!;
+  const listed = (polygons.length ? polygons.map(nameOf) : names).join(", ");
+  throw new FabricInputError("too_many_layers", `The zip holds ${bases.length} Shapefiles (${listed}); upload one, or name the layer to read.`, { layers: names });
 }
 
 function checkShapeType(shp: Uint8Array, layer: string): void {
@@ -64,15 +78,18 @@ function readAttributes(dbf: Uint8Array | undefined, cpgText: string | undefined
  */
 export async function readShapefileZip(bytes: Uint8Array, options: ReadOptions = {}): Promise<ReadResult> {
   const entries = await readZipEntries(bytes);
-  const base = pickLayer(entries, options);
+  const warnings: string[] = [];
+  const base = pickLayer(entries, options, warnings);
   const layer = base.split("/").pop()!;
   const shp = sidecar(entries, base, ".shp")!;
   checkShapeType(shp, layer);
   const text = (ext: string) => { const b = sidecar(entries, base, ext); return b ? new TextDecoder().decode(b).trim() : undefined; };
   const geometries = parseShp(asView(shp) as never) as (Geometry | null)[];
-  const warnings: string[] = [];
   const { rows: attrs, fieldNames } = readAttributes(sidecar(entries, base, ".dbf"), text(".cpg"), geometries.length, warnings);
-  const rows: RawRow[] = geometries.map((geometry, i) => ({ geometry, properties: attrs[i] ?? {} }));
+  const dbf = sidecar(entries, base, ".dbf");
+  const deleted = dbf ? deletedDbfRecords(dbf) : new Set<number>();
+  const rows: RawRow[] = geometries.map((geometry, i) =>
+    deleted.has(i) ? { geometry, properties: attrs[i] ?? {}, problem: "record is marked deleted in the .dbf" } : { geometry, properties: attrs[i] ?? {} });
   const collected = collectFeatures(rows);
   const result: ReadResult = { ...collected, fieldNames, warnings: [...warnings, ...collected.warnings] };
   const prj = text(".prj");
