@@ -6,11 +6,12 @@ import { SOLVER_RESIDUAL_TOL } from "./tolerances";
 
 export type { CompoundParams } from "./compound-reduction";
 
-const MAX_ITERATIONS = 80;
+const MAX_ITERATIONS = 40;
 const FD_STEP = 1e-7;
-const ACCEPT_RESIDUAL = 1e-10;
-const GRID_POINTS = [0, 240, 40, 14] as const;
-const MAX_STARTS = 16;
+// Loose on purpose: the full Newton polish and the forward verification are the real gates.
+const ACCEPT_RESIDUAL = 1e-7;
+const GRID_POINTS = [0, 160, 28, 10] as const;
+const MAX_STARTS = 10;
 
 /**
  * Numerical solve for what the closed forms left open: scan the free coordinates on a grid, keep
@@ -23,10 +24,21 @@ export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): 
   const dims = red.bounds.length;
   if (dims === 0) return red.solveFixedAngles();
   const roots: CompoundParams[] = [];
-  for (const start of scanStarts(knowns, red)) {
+  const found: number[][] = [];
+  const solveFrom = (start: number[]) => {
     const u = runLevenbergMarquardt(knowns, red, start);
     const p = u && red.toParams(u);
-    if (p) roots.push(p);
+    if (u && p) {
+      roots.push(p);
+      found.push(u);
+    }
+  };
+  scanStarts(knowns, red).forEach(solveFrom);
+  if (dims === 1) {
+    // Two roots closer than a grid cell (near a double root) share one basin in the scan:
+    // restart just either side of each root found to pick up its twin.
+    const h = (red.bounds[0]![1] - red.bounds[0]![0]) / GRID_POINTS[1];
+    for (const u of [...found]) for (const k of [-1.5, -0.4, 0.4, 1.5]) solveFrom([u[0]! + k * h]);
   }
   return roots;
 }
@@ -43,18 +55,33 @@ function scanStarts(knowns: Known[], red: Reduction): number[][] {
   const dims = red.bounds.length;
   const n = GRID_POINTS[Math.min(dims, 3)]!;
   const costs = new Map<number, number>();
-  const coord = (idx: number[]) => idx.map((k, d) => red.bounds[d]![0] + ((k + 0.5) / n) * (red.bounds[d]![1] - red.bounds[d]![0]));
+  const vectors = new Map<number, number[]>();
+  const coord = (idx: number[]) => idx.map((k, d) => red.bounds[d]![0] + ((k + 0.5) / n) ** red.gridPower * (red.bounds[d]![1] - red.bounds[d]![0]));
   const total = n ** dims;
   for (let flat = 0; flat < total; flat++) {
     const r = residuals(knowns, red, coord(unflatten(flat, n, dims)));
-    if (r) costs.set(flat, sumSquares(r));
+    if (!r) continue;
+    costs.set(flat, sumSquares(r));
+    if (dims === 1) vectors.set(flat, r);
   }
   const minima: [number, number][] = [];
   for (const [flat, cost] of costs) {
     const idx = unflatten(flat, n, dims);
     if (neighbours(idx, n).every((f) => (costs.get(f) ?? Infinity) >= cost)) minima.push([flat, cost]);
   }
-  return minima.sort((a, b) => a[1] - b[1]).slice(0, MAX_STARTS).map(([flat]) => coord(unflatten(flat, n, dims)));
+  const starts = minima.sort((a, b) => a[1] - b[1]).slice(0, MAX_STARTS).map(([flat]) => coord(unflatten(flat, n, dims)));
+  return dims === 1 ? [...starts, ...signChangeStarts(vectors, coord)] : starts;
+}
+
+/** 1-D only: where a residual changes sign between grid points, a root is bracketed; start there too. */
+function signChangeStarts(vectors: Map<number, number[]>, coord: (idx: number[]) => number[]): number[][] {
+  const out: number[][] = [];
+  for (const [flat, r] of vectors) {
+    const next = vectors.get(flat + 1);
+    if (!next) continue;
+    if (r.some((v, j) => v * next[j]! < 0 && Math.abs(v - next[j]!) < 1)) out.push(coord([flat + 0.5]));
+  }
+  return out.slice(0, MAX_STARTS);
 }
 
 function unflatten(flat: number, n: number, dims: number): number[] {

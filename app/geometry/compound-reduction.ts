@@ -10,6 +10,8 @@ export type CompoundParams = [number, number, number, number];
 export interface Reduction {
   /** Range of each free angle coordinate (radians), for the starting-point scan. */
   bounds: [number, number][];
+  /** Grid spacing exponent for the scan: 2 crowds points towards small angles. */
+  gridPower: number;
   /** Parameters for a point of the free coordinates; undefined where no valid radii exist. */
   toParams(u: number[]): CompoundParams | undefined;
   /** Every solution when no angle is free (the long chord can give two). */
@@ -29,6 +31,8 @@ export function buildReduction(seed: CompoundState, knowns: Known[]): Reduction 
   const others = knowns.filter((k) => !PURE_ANGLE_KEYS.has(k.key));
   return {
     bounds: angle.bounds,
+    // With both angles free, flat curves (a few degrees) would fall inside one uniform cell.
+    gridPower: angle.bounds.length === 2 ? 2 : 1,
     toParams(u) {
       const [d1, d2] = angle.map(u);
       if (!(d1 > 0 && d2 > 0 && d1 + d2 < Math.PI)) return undefined;
@@ -129,18 +133,22 @@ function solveRadiiWithChord(knowns: Known[], d1: number, d2: number): [number, 
   return ts.map((t) => [r0[0] + t * n[0], r0[1] + t * n[1]]);
 }
 
+/** Least squares for (R1, R2) by Gram–Schmidt QR on unit-scaled rows (normal equations lose digits). */
 function solveRadii(knowns: Known[], d1: number, d2: number): [number, number] | undefined {
   const { rows } = linearRows(knowns, d1, d2);
-  // Normal equations of the 2-unknown least-squares problem.
-  let [s11, s12, s22, g1, g2] = [0, 0, 0, 0, 0];
-  for (const [a, b, c] of rows) {
-    s11 += a * a;
-    s12 += a * b;
-    s22 += b * b;
-    g1 += a * c;
-    g2 += b * c;
-  }
-  const det = s11 * s22 - s12 * s12;
-  if (!(Math.abs(det) > 1e-14 * Math.max(s11 * s22, 1e-300))) return undefined;
-  return [(g1 * s22 - g2 * s12) / det, (s11 * g2 - s12 * g1) / det];
+  const scaled = rows.map(([a, b, c]) => {
+    const h = Math.hypot(a, b) || 1;
+    return [a / h, b / h, c / h] as const;
+  });
+  const r11 = Math.hypot(...scaled.map((r) => r[0]));
+  if (!(r11 > 0)) return undefined;
+  const q1 = scaled.map((r) => r[0] / r11);
+  const r12 = scaled.reduce((s, r, i) => s + q1[i]! * r[1], 0);
+  const v = scaled.map((r, i) => r[1] - r12 * q1[i]!);
+  const r22 = Math.hypot(...v);
+  if (!(r22 > 1e-12)) return undefined;
+  const q2 = v.map((x) => x / r22);
+  const x2 = scaled.reduce((s, r, i) => s + q2[i]! * r[2], 0) / r22;
+  const x1 = (scaled.reduce((s, r, i) => s + q1[i]! * r[2], 0) - r12 * x2) / r11;
+  return [x1, x2];
 }
