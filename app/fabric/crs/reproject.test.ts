@@ -66,6 +66,11 @@ test("reproject converts every vertex, keeps holes and re-normalizes winding", (
   expect(signedDoubleArea(out.coordinates[1]!)).toBeLessThan(0);
 });
 
+test("shipped EPSG codes can be named directly", () => {
+  expect(reprojectPoint([-118.2437, 34.0522], "EPSG:4326", "EPSG:32611")).toEqual(reprojectPoint([-118.2437, 34.0522], def(4326), def(32611)));
+  expect(() => reprojectPoint([0, 0], "EPSG:99999", "EPSG:4326")).toThrow(/not in Takeline/);
+});
+
 test("a point outside the projection's domain raises reprojection_failed, not NaN coordinates", () => {
   expect(() => reprojectPoint([0, 90], def(4326), def(3857))).toThrow(/cannot be converted/);
 });

@@ -3,14 +3,23 @@ import type { Position } from "geojson";
 import { FabricInputError } from "../errors";
 import type { AreaGeometry } from "../types";
 import { normalizeOrientation } from "../geometry/ring-orientation";
+import { findCrsByCode } from "./epsg-list";
 
 const converters = new Map<string, Converter>();
+
+/** "EPSG:nnnn" for a shipped code becomes its proj4 string; anything else is a definition already. */
+function definitionOf(def: string): string {
+  const m = /^EPSG:(\d+)$/i.exec(def.trim());
+  const entry = m ? findCrsByCode(Number(m[1])) : undefined;
+  if (m && !entry) throw new FabricInputError("unknown_crs", `${def} is not in Takeline's coordinate system list.`, { crs: def });
+  return entry ? entry.proj4 : def;
+}
 
 function converterFor(from: string, to: string): Converter {
   const key = `${from}\u0000${to}`;
   let c = converters.get(key);
   if (!c) {
-    c = proj4(from, to);
+    c = proj4(definitionOf(from), definitionOf(to));
     converters.set(key, c);
   }
   return c;
@@ -33,7 +42,7 @@ function convertPosition(c: Converter, p: Position): Position {
 
 /**
  * Reprojects every vertex exactly with proj4 (no densifying, no simplifying)
- * from one proj4 definition to another; geographic CRSs are [lon, lat] in
+ * between proj4 definitions, WKTs or shipped "EPSG:nnnn" codes; geographic CRSs are [lon, lat] in
  * degrees, projected ones in their own unit. Winding is re-normalized after,
  * because some projections mirror the plane. Throws FabricInputError
  * `reprojection_failed` for points the projection cannot take.

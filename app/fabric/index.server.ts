@@ -1,0 +1,23 @@
+/**
+ * Everything the upload route and tile route need from the fabric library.
+ * Server-only because it includes the GeoPackage reader (better-sqlite3);
+ * browser code imports the plain modules (e.g. crs/epsg-list) directly.
+ */
+export { FabricInputError, isFabricInputError, type FabricErrorCode } from "./errors";
+export type { AreaFeature, AreaGeometry, Properties, ReadOptions, ReadResult, RejectedRow } from "./types";
+export { readParcelUpload } from "./upload/read-parcel-upload.server";
+export type { ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload/upload-types";
+export { detectFormat, type FabricFormat } from "./upload/detect-format";
+export { readShapefileZip } from "./readers/shapefile-zip";
+export { readGeoJson } from "./readers/geojson";
+export { readGeoPackage } from "./readers/geopackage.server";
+export { CRS_ENTRIES, findCrsByCode, parseEpsgCode, searchCrs } from "./crs/epsg-list";
+export type { CrsEntry } from "./crs/crs-entry";
+export { isProjected, resolveCrs, type ResolvedCrs } from "./crs/resolve-crs";
+export { reproject, reprojectPoint } from "./crs/reproject";
+export { utmZoneFor } from "./crs/utm-zone";
+export { METRES_PER_UNIT, convertArea, convertLength, type LengthUnit } from "./crs/units";
+export { polygonArea, ringArea } from "./geometry/area";
+export { FEATURE_ID_SOURCE, TARGET_ATTRIBUTES, guessFieldMapping, type FieldMapping, type TargetAttribute } from "./attributes/field-mapping";
+export { applyFieldMapping, type LandValueBasis, type MappedAttributes } from "./attributes/apply-mapping";
+export { buildTileIndex, encodeTile, type TileIndex } from "./tiles/vector-tiles";
