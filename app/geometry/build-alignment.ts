@@ -87,7 +87,7 @@ function checkTangentsFit(legs: AlignmentLegs, curves: (ResolvedPiCurve | undefi
     const who = [curves[j] ? `PI ${j}` : undefined, curves[j + 1] ? `PI ${j + 1}` : undefined].filter(Boolean).join(" and ");
     throw new GeometryInputError(
       "tangent_overrun",
-      `the curve${who.includes("and") ? "s" : ""} at ${who} need ${roundForMessage(need)} of tangent but the leg from point ${j} to point ${j + 1} is only ${roundForMessage(len)} long`,
+      `${who.includes("and") ? "the curves at " + who + " need" : "the curve at " + who + " needs"} ${roundForMessage(need)} of tangent but the leg from point ${j} to point ${j + 1} is only ${roundForMessage(len)} long`,
       { field: `points.${curves[j + 1] ? j + 1 : j}.curve`, piIndex: curves[j + 1] ? j + 1 : j, needed: need, available: len },
     );
   });
