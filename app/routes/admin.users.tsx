@@ -30,8 +30,8 @@ export function meta() {
 }
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireUser(request, { roles: ACCESS.manageUsers });
-  return { users: listUsers() };
+  const admin = await requireUser(request, { roles: ACCESS.manageUsers });
+  return { users: listUsers(), selfId: admin.id };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -57,9 +57,18 @@ export async function action({ request }: Route.ActionArgs) {
 
 const STATUS_TONE = { active: "action", invited: "info", disabled: "neutral" } as const;
 
-function UserRowActions({ user }: { user: PublicUser }) {
+function UserRowActions({ user, isSelf }: { user: PublicUser; isSelf: boolean }) {
+  if (isSelf) return <span className="text-xs text-ink-soft">you</span>;
   return (
     <div className="flex gap-2">
+      {user.status === "invited" && (
+        <Form method="post">
+          <input type="hidden" name="intent" value="invite" />
+          <input type="hidden" name="email" value={user.email} />
+          <input type="hidden" name="role" value={user.role} />
+          <Button type="submit" variant="quiet">Resend invitation</Button>
+        </Form>
+      )}
       <Form method="post" className="flex gap-2">
         <input type="hidden" name="intent" value="set-role" />
         <input type="hidden" name="userId" value={user.id} />
@@ -79,7 +88,7 @@ function UserRowActions({ user }: { user: PublicUser }) {
 }
 
 export default function AdminUsers() {
-  const { users } = useLoaderData<typeof loader>();
+  const { users, selfId } = useLoaderData<typeof loader>();
   const result = useActionData<typeof action>();
   const navigation = useNavigation();
   const [inviting, setInviting] = useState(false);
@@ -99,7 +108,7 @@ export default function AdminUsers() {
             { header: "E-mail", cell: (u) => u.email },
             { header: "Role", cell: (u) => ROLE_LABELS[u.role] },
             { header: "Status", cell: (u) => <Badge tone={STATUS_TONE[u.status]}>{u.status}</Badge> },
-            { header: "Change", cell: (u) => <UserRowActions user={u} /> },
+            { header: "Change", cell: (u) => <UserRowActions user={u} isSelf={u.id === selfId} /> },
           ]}
         />
       </Card>

@@ -1,4 +1,5 @@
 import type { Route } from "./+types/api.v1.alignments.geometry";
+import { applyCheckAcceptances } from "~/calculations/check-acceptances";
 import { computeAlignmentGeometry } from "~/geometry/compute-alignment-geometry";
 import { AlignmentGeometryRequestSchema } from "~/schemas/alignment-schemas";
 import { ACCESS } from "~/utils/access";
@@ -15,7 +16,8 @@ export const action = apiHandler(async ({ request }: Route.ActionArgs) => {
   await requireUser(request, { roles: ACCESS.calculator });
   const body = await readJsonBody(request, AlignmentGeometryRequestSchema);
   const geometry = computeAlignmentGeometry(body.alignment, { design: body.design, offsets: body.offsets, chordTolerance: body.chordTolerance });
-  return Response.json(geometry);
+  const reviewed = applyCheckAcceptances(geometry.checks, body.acceptedChecks);
+  return Response.json({ ...geometry, checks: reviewed.checks, staleAcceptances: reviewed.stale });
 });
 
 export const loader = apiHandler(async () => apiError("method_not_allowed", "Use POST on this path.", undefined, { Allow: "POST" }));

@@ -34,4 +34,6 @@ export const AlignmentGeometryRequestSchema = z.object({
   design: DesignCheckSchema.optional(),
   offsets: z.array(z.number().finite()).max(20).optional(),
   chordTolerance: z.number().positive().optional(),
+  /** Failed checks the planner accepted, by check id, each with the reason (kept with the alternative). */
+  acceptedChecks: z.array(z.object({ id: z.string().min(1).max(120), reason: z.string().trim().min(3, "Give a reason for accepting the check.").max(2000) })).max(500).optional(),
 });

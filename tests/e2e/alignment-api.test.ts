@@ -55,3 +55,19 @@ test("a malformed alignment is a 422 with field details", async () => {
   const body = (await res.json()) as { error: { details: { path: string }[] } };
   expect(body.error.details.map((d) => d.path)).toEqual(expect.arrayContaining(["alignment.units"]));
 });
+
+test("a failed radius check can be accepted with a reason, and comes back marked accepted", async () => {
+  // AASHTO 2018 Table 3-7: 100 km/h at emax 6 % needs R ≥ 437 m; R 300 m fails.
+  const alignment = { units: "m", startStation: 0, points: [{ x: 0, y: 0 }, { x: 1000, y: 0, curve: { type: "simple", radius: 300 } }, { x: 1500, y: 500 }] };
+  const first = (await (await postJson("/api/v1/alignments/geometry", { alignment, design: { designSpeed: 100, speedUnit: "km/h", emaxPercent: 6 } }, auth)).json()) as Geometry;
+  const failed = first.checks.find((c) => c.severity === "warning" && c.id.startsWith("min-radius"))!;
+  expect(failed).toBeDefined();
+  const res = await postJson(
+    "/api/v1/alignments/geometry",
+    { alignment, design: { designSpeed: 100, speedUnit: "km/h", emaxPercent: 6 }, acceptedChecks: [{ id: failed.id, reason: "Posted 70 km/h zone through the river crossing" }] },
+    auth,
+  );
+  const body = (await res.json()) as { checks: { id: string; accepted?: { reason: string } }[]; staleAcceptances: unknown[] };
+  expect(body.checks.find((c) => c.id === failed.id)?.accepted?.reason).toMatch(/70 km\/h/);
+  expect(body.staleAcceptances).toEqual([]);
+});
