@@ -14,7 +14,8 @@ missing=()
 for cmd in "${!NEEDED[@]}"; do
   command -v "$cmd" >/dev/null 2>&1 || missing+=("${NEEDED[$cmd]}")
 done
-python3 -c "import shapely" >/dev/null 2>&1 || missing+=(python3-shapely)
+# python3-shapely installs into Debian's own python3, which another python3 on PATH may hide.
+/usr/bin/python3 -c "import shapely" >/dev/null 2>&1 || python3 -c "import shapely" >/dev/null 2>&1 || missing+=(python3-shapely)
 
 if [ ${#missing[@]} -eq 0 ]; then
   exit 0
