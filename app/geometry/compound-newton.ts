@@ -2,16 +2,17 @@ import { evaluateCompoundCore } from "./compound-core";
 import { residualOf, type Known } from "./compound-knowns";
 import { buildReduction, type CompoundParams, type Reduction } from "./compound-reduction";
 import type { CompoundState } from "./compound-state";
+import { runLevenbergMarquardt, sumSquares } from "./levenberg-marquardt";
 import { SOLVER_RESIDUAL_TOL } from "./tolerances";
 
 export type { CompoundParams } from "./compound-reduction";
 
 const MAX_ITERATIONS = 40;
-const FD_STEP = 1e-7;
 // Loose on purpose: the full Newton polish and the forward verification are the real gates.
 const ACCEPT_RESIDUAL = 1e-7;
 const GRID_POINTS = [0, 160, 28, 10] as const;
 const MAX_STARTS = 10;
+const LM_OPTIONS = { maxIterations: MAX_ITERATIONS, residualTol: SOLVER_RESIDUAL_TOL, acceptResidual: ACCEPT_RESIDUAL };
 
 /**
  * Numerical solve for what the closed forms left open: scan the free coordinates on a grid, keep
@@ -25,20 +26,23 @@ export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): 
   if (dims === 0) return red.solveFixedAngles();
   const roots: CompoundParams[] = [];
   const found: number[][] = [];
-  const solveFrom = (start: number[]) => {
-    const u = runLevenbergMarquardt(knowns, red, start);
+  const cell = red.bounds.map(([lo, hi]) => (hi - lo) / GRID_POINTS[Math.min(dims, 3)]!);
+  const solveFrom = (start: number[], force = false) => {
+    // A start within half a grid cell of a root already found would only find it again.
+    if (!force && found.some((f) => f.every((v, d) => Math.abs(v - start[d]!) < 0.5 * cell[d]!))) return;
+    const u = runLevenbergMarquardt((x) => residuals(knowns, red, x), start, LM_OPTIONS);
     const p = u && red.toParams(u);
     if (u && p) {
       roots.push(p);
       found.push(u);
     }
   };
-  scanStarts(knowns, red).forEach(solveFrom);
+  scanStarts(knowns, red).forEach((s) => solveFrom(s));
   if (dims === 1) {
     // Two roots closer than a grid cell (near a double root) share one basin in the scan:
     // restart just either side of each root found to pick up its twin.
     const h = (red.bounds[0]![1] - red.bounds[0]![0]) / GRID_POINTS[1];
-    for (const u of [...found]) for (const k of [-1.5, -0.4, 0.4, 1.5]) solveFrom([u[0]! + k * h]);
+    for (const u of [...found]) for (const k of [-1.5, -0.4, 0.4, 1.5]) solveFrom([u[0]! + k * h], true);
   }
   return roots;
 }
@@ -111,80 +115,4 @@ function neighbours(idx: number[], n: number): number[] {
     if (!self && inside) out.push(flat);
   }
   return out;
-}
-
-function runLevenbergMarquardt(knowns: Known[], red: Reduction, u0: number[]): number[] | undefined {
-  let u: number[] = u0;
-  const r0 = residuals(knowns, red, u);
-  if (!r0) return undefined;
-  let r: number[] = r0;
-  let cost = sumSquares(r);
-  let lambda = 1e-3;
-  for (let it = 0; it < MAX_ITERATIONS && maxAbs(r) > SOLVER_RESIDUAL_TOL; it++) {
-    const jac = jacobian(knowns, red, u, r);
-    const step: number[] | undefined = jac && dampedStep(jac, r, lambda);
-    const next: number[] | undefined = step && u.map((v, i) => v + step[i]!);
-    const rNext: number[] | undefined = next && residuals(knowns, red, next);
-    if (next && rNext && sumSquares(rNext) < cost) {
-      [u, r, cost] = [next, rNext, sumSquares(rNext)];
-      lambda = Math.max(lambda * 0.1, 1e-15);
-    } else {
-      lambda *= 10;
-      if (lambda > 1e10) break;
-    }
-  }
-  return maxAbs(r) <= ACCEPT_RESIDUAL ? u : undefined;
-}
-
-function jacobian(knowns: Known[], red: Reduction, u: number[], r: number[]): number[][] | undefined {
-  const cols: number[][] = [];
-  for (let j = 0; j < u.length; j++) {
-    let h = FD_STEP * Math.max(1, Math.abs(u[j]!));
-    const up = [...u];
-    up[j]! += h;
-    let rp = residuals(knowns, red, up);
-    if (!rp) {
-      up[j]! -= 2 * h;
-      h = -h;
-      rp = residuals(knowns, red, up);
-    }
-    if (!rp) return undefined;
-    cols.push(rp.map((v, i) => (v - r[i]!) / h));
-  }
-  return r.map((_, i) => cols.map((c) => c[i]!));
-}
-
-/** Solves (JᵀJ + λ·diag(JᵀJ)) δ = −Jᵀr by Gaussian elimination with partial pivoting. */
-function dampedStep(jac: number[][], r: number[], lambda: number): number[] | undefined {
-  const k = jac[0]!.length;
-  const ids = [...Array(k).keys()];
-  const a = ids.map((i) => ids.map((j) => jac.reduce((s, row) => s + row[i]! * row[j]!, 0)));
-  const g = ids.map((i) => -jac.reduce((s, row, m) => s + row[i]! * r[m]!, 0));
-  for (const i of ids) a[i]![i]! += lambda * Math.max(a[i]![i]!, 1e-12);
-  for (let c = 0; c < k; c++) {
-    let p = c;
-    for (let i = c + 1; i < k; i++) if (Math.abs(a[i]![c]!) > Math.abs(a[p]![c]!)) p = i;
-    if (a[p]![c] === 0) return undefined;
-    [a[c], a[p], g[c], g[p]] = [a[p]!, a[c]!, g[p]!, g[c]!];
-    for (let i = c + 1; i < k; i++) {
-      const f = a[i]![c]! / a[c]![c]!;
-      for (let m = c; m < k; m++) a[i]![m]! -= f * a[c]![m]!;
-      g[i]! -= f * g[c]!;
-    }
-  }
-  const out = new Array<number>(k).fill(0);
-  for (let i = k - 1; i >= 0; i--) {
-    let s = g[i]!;
-    for (let m = i + 1; m < k; m++) s -= a[i]![m]! * out[m]!;
-    out[i] = s / a[i]![i]!;
-  }
-  return out.every(Number.isFinite) ? out : undefined;
-}
-
-function sumSquares(r: number[]): number {
-  return r.reduce((s, v) => s + v * v, 0);
-}
-
-function maxAbs(r: number[]): number {
-  return r.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
 }

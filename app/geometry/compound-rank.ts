@@ -6,7 +6,18 @@ import { RANK_REL_TOL } from "./tolerances";
 // t, L for one arc, …) show as a rank drop here, while independent sets have full rank.
 const GENERIC = { r1: 613.7, r2: 241.3, d1: 0.7313, d2: 0.5219 };
 
+// The gradient at the generic curve depends only on which known it is, not on its value.
+const GRADIENT_CACHE = new Map<string, number[]>();
+
 function gradientOf(known: Known): number[] {
+  const cached = GRADIENT_CACHE.get(known.key);
+  if (cached) return cached;
+  const g = computeGradient(known);
+  GRADIENT_CACHE.set(known.key, g);
+  return g;
+}
+
+function computeGradient(known: Known): number[] {
   const x0 = [Math.log(GENERIC.r1), Math.log(GENERIC.r2), GENERIC.d1, GENERIC.d2];
   const at = (x: number[]): number => {
     const core = evaluateCompoundCore(Math.exp(x[0]!), Math.exp(x[1]!), x[2]!, x[3]!);

@@ -1,7 +1,6 @@
-import { evaluateCompoundCore } from "./compound-core";
-import { readKnown, type Known } from "./compound-knowns";
+import type { Known } from "./compound-knowns";
+import { solveRadii, solveRadiiWithChord } from "./compound-radii";
 import type { CompoundState } from "./compound-state";
-import { crossVec, unitAtRad } from "./vec2";
 
 /** Parameters [R1, R2, Δ1 rad, Δ2 rad]. */
 export type CompoundParams = [number, number, number, number];
@@ -63,92 +62,4 @@ function angleMapping(seed: CompoundState): AngleMapping {
   if (d2 !== undefined) return { bounds: [[0, Math.PI - d2]], map: (u) => [u[0]!, d2] };
   if (d !== undefined) return { bounds: [[0, d]], map: (u) => [u[0]!, d - u[0]!] };
   return { bounds: [[0, Math.PI], [0, Math.PI]], map: (u) => [u[0]!, u[1]!] };
-}
-
-/** Linear rows a·R1 + b·R2 = c from the knowns at fixed angles (the long chord is kept aside). */
-function linearRows(knowns: Known[], d1: number, d2: number): { rows: [number, number, number][]; chord?: number } {
-  const u1 = evaluateCompoundCore(1, 0, d1, d2);
-  const u2 = evaluateCompoundCore(0, 1, d1, d2);
-  const rows: [number, number, number][] = [];
-  let chord: number | undefined;
-  for (const k of knowns) {
-    if (k.key === "longChord") chord = k.value;
-    else if (k.kind === "length") rows.push([readKnown(u1, k.key) / k.value, readKnown(u2, k.key) / k.value, 1]);
-    else {
-      const phi = k.key === "chordAnglePC" ? k.value : k.key === "chordAnglePT" ? d1 + d2 - k.value : d1;
-      const dir = unitAtRad(phi);
-      const [a, b] = [crossVec(u1.pt, dir), crossVec(u2.pt, dir)];
-      const n = Math.hypot(a, b) || 1;
-      rows.push([a / n, b / n, 0]);
-    }
-  }
-  const distinct = dropParallelRows(rows);
-  if (chord !== undefined && distinct.length < 2) distinct.push(...chordRowsFor(distinct[0], u1.pt, u2.pt, chord));
-  return chord === undefined ? { rows: distinct } : { rows: distinct, chord };
-}
-
-/** Rows that say the same thing (R1 and t1 both given, say) would make the solve singular. */
-function dropParallelRows(rows: [number, number, number][]): [number, number, number][] {
-  const out: [number, number, number][] = [];
-  for (const r of rows) {
-    const parallel = out.some((q) => Math.abs(r[0] * q[1] - r[1] * q[0]) <= 1e-12 * Math.hypot(r[0], r[1]) * Math.hypot(q[0], q[1]));
-    if (!parallel) out.push(r);
-  }
-  return out;
-}
-
-/** With a single linear row left, the long chord fixes the scale along it (one homogeneous row). */
-function chordRowsFor(row: [number, number, number] | undefined, p1: [number, number], p2: [number, number], lc: number): [number, number, number][] {
-  if (!row || row[2] !== 0) return [];
-  const [a, b] = row;
-  const v: [number, number] = [b * p1[0] - a * p2[0], b * p1[1] - a * p2[1]];
-  const k = lc / Math.hypot(v[0], v[1]);
-  return [[1, 0, b * k * Math.sign(b || 1)], [0, 1, -a * k * Math.sign(b || 1)]];
-}
-
-/**
- * One inhomogeneous linear row plus the long chord: R = R0 + t·n along the row's null direction
- * and |PT(R)| = LC is a quadratic in t, so up to two radius pairs. Undefined if not that case.
- */
-function solveRadiiWithChord(knowns: Known[], d1: number, d2: number): [number, number][] | undefined {
-  const { rows, chord } = linearRows(knowns, d1, d2);
-  const row = rows[0];
-  if (chord === undefined || rows.length !== 1 || !row || row[2] === 0) return undefined;
-  const u1 = evaluateCompoundCore(1, 0, d1, d2).pt;
-  const u2 = evaluateCompoundCore(0, 1, d1, d2).pt;
-  const [a, b, c] = row;
-  const r0: [number, number] = [(c * a) / (a * a + b * b), (c * b) / (a * a + b * b)];
-  const n: [number, number] = [-b, a];
-  const p0 = [r0[0] * u1[0] + r0[1] * u2[0], r0[0] * u1[1] + r0[1] * u2[1]] as const;
-  const pn = [n[0] * u1[0] + n[1] * u2[0], n[0] * u1[1] + n[1] * u2[1]] as const;
-  const qa = pn[0] * pn[0] + pn[1] * pn[1];
-  const qb = 2 * (p0[0] * pn[0] + p0[1] * pn[1]);
-  const qc = p0[0] * p0[0] + p0[1] * p0[1] - chord * chord;
-  const disc = qb * qb - 4 * qa * qc;
-  if (!(disc >= 0) || qa === 0) return [];
-  const sq = Math.sqrt(disc);
-  // Numerically stable pair of roots.
-  const q = -0.5 * (qb + Math.sign(qb || 1) * sq);
-  const ts = q === 0 ? [0] : [q / qa, qc / q];
-  return ts.map((t) => [r0[0] + t * n[0], r0[1] + t * n[1]]);
-}
-
-/** Least squares for (R1, R2) by Gram–Schmidt QR on unit-scaled rows (normal equations lose digits). */
-function solveRadii(knowns: Known[], d1: number, d2: number): [number, number] | undefined {
-  const { rows } = linearRows(knowns, d1, d2);
-  const scaled = rows.map(([a, b, c]) => {
-    const h = Math.hypot(a, b) || 1;
-    return [a / h, b / h, c / h] as const;
-  });
-  const r11 = Math.hypot(...scaled.map((r) => r[0]));
-  if (!(r11 > 0)) return undefined;
-  const q1 = scaled.map((r) => r[0] / r11);
-  const r12 = scaled.reduce((s, r, i) => s + q1[i]! * r[1], 0);
-  const v = scaled.map((r, i) => r[1] - r12 * q1[i]!);
-  const r22 = Math.hypot(...v);
-  if (!(r22 > 1e-12)) return undefined;
-  const q2 = v.map((x) => x / r22);
-  const x2 = scaled.reduce((s, r, i) => s + q2[i]! * r[2], 0) / r22;
-  const x1 = (scaled.reduce((s, r, i) => s + q1[i]! * r[2], 0) - r12 * x2) / r11;
-  return [x1, x2];
 }
