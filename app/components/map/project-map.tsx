@@ -1,0 +1,124 @@
+import { useCallback, useMemo, useRef, useState } from "react";
+import Map, { Layer, NavigationControl, ScaleControl, Source, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
+import { MapLegend } from "./map-legend";
+import { ParcelCard, type ParcelSummary } from "./parcel-card";
+import { parcelFillColour, type ParcelColouring } from "./parcel-styles";
+import { MapToolbar } from "./map-toolbar";
+
+export type MapLayerInfo = { id: number; kind: "parcels" | "buildings"; name: string; bbox: [number, number, number, number] | null };
+
+let mapLib: Promise<typeof import("maplibre-gl")> | undefined;
+/** MapLibre is loaded in the browser only, once; the server renders the map's frame without it. */
+function browserMapLib() {
+  if (typeof window === "undefined") return undefined;
+  mapLib ??= import("./maplibre-with-worker").then((m) => m.maplibregl);
+  return mapLib;
+}
+
+function unionBbox(layers: MapLayerInfo[]): [number, number, number, number] | undefined {
+  const boxes = layers.map((l) => l.bbox).filter((b): b is [number, number, number, number] => b !== null);
+  if (boxes.length === 0) return undefined;
+  return [Math.min(...boxes.map((b) => b[0])), Math.min(...boxes.map((b) => b[1])), Math.max(...boxes.map((b) => b[2])), Math.max(...boxes.map((b) => b[3]))];
+}
+
+/** The project map: our own basemap tiles, the project's parcel and building layers as vector tiles from the app. */
+export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapLayerInfo[]; basemapStyleUrl: string; areaUnit: string }) {
+  const mapRef = useRef<MapRef>(null);
+  const [hidden, setHidden] = useState<Set<number>>(new Set());
+  const [colouring, setColouring] = useState<ParcelColouring>("landUse");
+  const [selected, setSelected] = useState<ParcelSummary | null>(null);
+  const hovered = useRef<{ source: string; id: number } | null>(null);
+  const bounds = useMemo(() => unionBbox(layers), [layers]);
+  const origin = typeof window === "undefined" ? "" : window.location.origin;
+  const parcelLayers = layers.filter((l) => l.kind === "parcels");
+  const interactive = parcelLayers.filter((l) => !hidden.has(l.id)).map((l) => `parcels-fill-${l.id}`);
+
+  const setHover = useCallback((next: { source: string; id: number } | null) => {
+    const map = mapRef.current?.getMap();
+    if (!map) return;
+    if (hovered.current) map.setFeatureState({ source: hovered.current.source, sourceLayer: "parcels", id: hovered.current.id }, { hover: false });
+    hovered.current = next;
+    if (next) map.setFeatureState({ source: next.source, sourceLayer: "parcels", id: next.id }, { hover: true });
+  }, []);
+  const onMove = (e: MapLayerMouseEvent) => {
+    const f = e.features?.[0];
+    setHover(f && typeof f.id === "number" ? { source: f.source, id: f.id } : null);
+  };
+  const onClick = (e: MapLayerMouseEvent) => {
+    const p = e.features?.[0]?.properties;
+    setSelected(p ? { parcelId: String(p.parcelId), owner: p.owner, address: p.address, landUse: p.landUse, area: Number(p.area), landValue: p.landValue === undefined ? undefined : Number(p.landValue) } : null);
+  };
+  const zoomTo = (layer?: MapLayerInfo) => {
+    const b = layer?.bbox ?? bounds;
+    if (b) mapRef.current?.fitBounds([[b[0], b[1]], [b[2], b[3]]], { padding: 40, duration: 500 });
+  };
+
+  return (
+    <div className="space-y-3">
+      <MapToolbar
+        layers={layers}
+        hidden={hidden}
+        onToggle={(id) => setHidden((h) => { const n = new Set(h); if (n.has(id)) n.delete(id); else n.add(id); return n; })}
+        colouring={colouring}
+        onColouring={setColouring}
+        onZoomTo={zoomTo}
+        onFound={(p, at) => { setSelected(p); mapRef.current?.flyTo({ center: at, zoom: 17 }); }}
+        search={(q) => searchRendered(mapRef.current, q)}
+      />
+      <div className="relative h-[560px] overflow-hidden rounded-lg border border-rule" data-testid="project-map">
+        <Map
+          ref={mapRef}
+          mapLib={browserMapLib()}
+          mapStyle={basemapStyleUrl}
+          initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 40 } } : { longitude: 0, latitude: 20, zoom: 1 }}
+          interactiveLayerIds={interactive}
+          onMouseMove={onMove}
+          onMouseLeave={() => setHover(null)}
+          onClick={onClick}
+          cursor={hovered.current ? "pointer" : "grab"}
+          onLoad={() => { (window as unknown as { __takelineMapReady?: boolean }).__takelineMapReady = true; }}
+          attributionControl={false}
+        >
+          <NavigationControl position="top-left" showCompass={false} />
+          <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />
+          {layers.map((l) => (
+            <Source key={l.id} id={`layer-${l.id}`} type="vector" tiles={[`${origin}/tiles/layers/${l.id}/{z}/{x}/{y}.pbf`]} minzoom={0} maxzoom={18}>
+              {l.kind === "parcels" ? (
+                <>
+                  <Layer id={`parcels-fill-${l.id}`} type="fill" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                    paint={{ "fill-color": parcelFillColour(colouring), "fill-opacity": ["case", ["boolean", ["feature-state", "hover"], false], 0.9, 0.6] }} />
+                  <Layer id={`parcels-line-${l.id}`} type="line" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                    paint={{ "line-color": "#5b5446", "line-width": ["interpolate", ["linear"], ["zoom"], 12, 0.3, 17, 1.2] }} />
+                </>
+              ) : (
+                <Layer id={`buildings-${l.id}`} type="fill" source-layer="buildings" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                  paint={{ "fill-color": "#6f675a", "fill-opacity": 0.85 }} />
+              )}
+            </Source>
+          ))}
+        </Map>
+        {parcelLayers.length > 0 && <MapLegend colouring={colouring} valueUnit={areaUnit} />}
+        {selected && <ParcelCard parcel={selected} areaUnit={areaUnit} onClose={() => setSelected(null)} />}
+      </div>
+    </div>
+  );
+}
+
+/** Finds parcels by ID or owner among the tiles already loaded (the whole fabric at the overview zoom). */
+function searchRendered(map: MapRef | null, query: string): { parcel: ParcelSummary; at: [number, number] }[] {
+  const m = map?.getMap();
+  const q = query.trim().toLowerCase();
+  if (!m || q.length < 2) return [];
+  const found = new globalThis.Map<string, { parcel: ParcelSummary; at: [number, number] }>();
+  for (const source of Object.keys(m.getStyle().sources).filter((s) => s.startsWith("layer-"))) {
+    for (const f of m.querySourceFeatures(source, { sourceLayer: "parcels" })) {
+      const p = f.properties ?? {};
+      if (!String(p.parcelId).toLowerCase().includes(q) && !String(p.owner ?? "").toLowerCase().includes(q)) continue;
+      const ring = f.geometry.type === "Polygon" ? f.geometry.coordinates[0] : f.geometry.type === "MultiPolygon" ? f.geometry.coordinates[0]?.[0] : undefined;
+      const at = (ring?.[0] ?? [0, 0]) as [number, number];
+      found.set(String(p.parcelId), { parcel: { parcelId: String(p.parcelId), owner: p.owner, address: p.address, landUse: p.landUse, area: Number(p.area), landValue: Number(p.landValue) }, at });
+      if (found.size >= 20) return [...found.values()];
+    }
+  }
+  return [...found.values()];
+}
