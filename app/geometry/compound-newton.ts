@@ -28,8 +28,8 @@ export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): 
   const found: number[][] = [];
   const cell = red.bounds.map(([lo, hi]) => (hi - lo) / GRID_POINTS[Math.min(dims, 3)]!);
   const solveFrom = (start: number[], force = false) => {
-    // A start within half a grid cell of a root already found would only find it again.
-    if (!force && found.some((f) => f.every((v, d) => Math.abs(v - start[d]!) < 0.5 * cell[d]!))) return;
+    // A start within a tenth of a grid cell of a root already found would only find it again.
+    if (!force && found.some((f) => f.every((v, d) => Math.abs(v - start[d]!) < 0.1 * cell[d]!))) return;
     const u = runLevenbergMarquardt((x) => residuals(knowns, red, x), start, LM_OPTIONS);
     const p = u && red.toParams(u);
     if (u && p) {
@@ -40,9 +40,9 @@ export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): 
   scanStarts(knowns, red).forEach((s) => solveFrom(s));
   if (dims === 1) {
     // Two roots closer than a grid cell (near a double root) share one basin in the scan:
-    // restart just either side of each root found to pick up its twin.
-    const h = (red.bounds[0]![1] - red.bounds[0]![0]) / GRID_POINTS[1];
-    for (const u of [...found]) for (const k of [-1.5, -0.4, 0.4, 1.5]) solveFrom([u[0]! + k * h], true);
+    // restart just either side of each root found to pick up its twin. (In 2-D the same
+    // restarts cost four times the solve time, so twins closer than a cell can be missed there.)
+    for (const u of [...found]) for (const k of [-1.5, -0.4, 0.4, 1.5]) solveFrom([u[0]! + k * cell[0]!], true);
   }
   return roots;
 }
