@@ -13,6 +13,9 @@ import { givenFrom, listIndependentSets, reproduces, sameCurve, type KnownSet } 
 // any known; and near Δ → 180° the PI triangle degenerates. There some knowns sets have two
 // roots closer than the solver's scan can separate; the solver then returns the root it
 // finds, which still reproduces every given value (checked in the last property below).
+// Known limit: even inside these bounds, a set whose numerical search is two-dimensional
+// (e.g. {R1, R2, T_PT, φ_PC}) can, about once in 10⁴ draws, have twin roots within one scan
+// cell and return only the twin. The seeds are fixed so CI is repeatable; other seeds can hit it.
 const curveArb = fc
   .record({
     r1Log: fc.double({ min: Math.log(20), max: Math.log(5000), noNaN: true }),
