@@ -1,5 +1,6 @@
 import { evaluateCompoundCore } from "./compound-core";
 import { residualOf, type Known } from "./compound-knowns";
+import { rankOf } from "./compound-rank";
 import type { CompoundParams } from "./compound-reduction";
 
 const MAX_STEPS = 8;
@@ -33,7 +34,19 @@ function residualsAt(knowns: Known[], x: number[]): number[] | undefined {
   return r.every(Number.isFinite) ? r : undefined;
 }
 
-function newtonStep(knowns: Known[], x: number[], r: number[]): number[] | undefined {
+/**
+ * True when the knowns pin the curve down near this root: their Jacobian in (ln R1, ln R2, Δ1, Δ2)
+ * has full rank. Fails for a continuum of solutions, e.g. R1 = R2, where any split of Δ fits.
+ */
+export function isIsolatedRoot(knowns: Known[], params: CompoundParams): boolean {
+  const x = [Math.log(params[0]), Math.log(params[1]), params[2], params[3]];
+  const r = residualsAt(knowns, x);
+  const cols = r && jacobianColumns(knowns, x);
+  if (!cols) return false;
+  return rankOf(knowns.map((_, i) => cols.map((c) => c[i]!))) === 4;
+}
+
+function jacobianColumns(knowns: Known[], x: number[]): number[][] | undefined {
   const cols: number[][] = [];
   for (let j = 0; j < 4; j++) {
     const up = [...x];
@@ -45,6 +58,12 @@ function newtonStep(knowns: Known[], x: number[], r: number[]): number[] | undef
     if (!ru || !rd) return undefined;
     cols.push(ru.map((v, i) => (v - rd[i]!) / (2 * STEP)));
   }
+  return cols;
+}
+
+function newtonStep(knowns: Known[], x: number[], r: number[]): number[] | undefined {
+  const cols = jacobianColumns(knowns, x);
+  if (!cols) return undefined;
   const a = r.map((_, i) => [...cols.map((c) => c[i]!), r[i]!]);
   return solveAugmented(a);
 }

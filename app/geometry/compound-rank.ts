@@ -36,7 +36,7 @@ function computeGradient(known: Known): number[] {
 }
 
 /** Rank of a set of row vectors by Gaussian elimination with row normalisation. */
-function rankOf(rows: number[][]): number {
+export function rankOf(rows: number[][]): number {
   const m = rows.map((r) => {
     const n = Math.hypot(...r);
     return n > 0 ? r.map((v) => v / n) : r;

@@ -116,3 +116,20 @@ test("stations come from the PC or the PI station", () => {
   expect(solutions[0]!.pccStation).toBeCloseTo(4760.327, 3);
   expect(solutions[0]!.ptStation).toBeCloseTo(5022.127, 3);
 });
+
+test("equal radii leave the split of Δ open, so the set is refused rather than answered arbitrarily", () => {
+  // With R1 = R2 the curve is simple (Schofield & Breach §10.1): T = R tan(Δ/2) for any Δ1.
+  const t = 300 * Math.tan((20 * Math.PI) / 180);
+  for (const given of [
+    { radius1: 300, radius2: 300, delta: 40, tangentPC: t },
+    { radius1: 300, radius2: 300, tangentPC: t, tangentPT: t },
+  ]) {
+    try {
+      solveCompoundCurve(given);
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(GeometryInputError);
+      expect((e as GeometryInputError).code).toBe("missing_knowns");
+    }
+  }
+});

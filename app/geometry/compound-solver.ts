@@ -3,7 +3,7 @@ import { toCompoundCurve, type CompoundCurve, type CompoundStationInput } from "
 import { describeNoSolution } from "./compound-diagnose";
 import { knownHolds, parseCompoundGiven, type CompoundGiven, type Known } from "./compound-knowns";
 import { solveCompoundNumerically, type CompoundParams } from "./compound-newton";
-import { polishCompoundRoot } from "./compound-polish";
+import { isIsolatedRoot, polishCompoundRoot } from "./compound-polish";
 import { propagateCompound } from "./compound-propagate";
 import { selectIndependentKnowns } from "./compound-rank";
 import { isComplete, stateFromKnowns } from "./compound-state";
@@ -33,8 +33,10 @@ export function solveCompoundCurve(given: CompoundGiven, stations: CompoundStati
   const roots = dedupeRoots(findRoots(chosen).map((p) => polishCompoundRoot(chosen, p)).filter(isValidParams));
   const fitting = roots.map((p) => evaluateCompoundCore(...p)).filter((core) => chosen.every((k) => knownHolds(core, k)));
   if (fitting.length === 0) throw describeNoSolution(chosen);
-  const agreeing = fitting.filter((core) => knowns.every((k) => knownHolds(core, k)));
-  if (agreeing.length === 0) throw overDetermined(knowns, chosen, fitting[0]!);
+  const isolated = fitting.filter((core) => isIsolatedRoot(chosen, [core.radius1, core.radius2, core.delta1Rad, core.delta2Rad]));
+  if (isolated.length === 0) throw notDetermined(chosen);
+  const agreeing = isolated.filter((core) => knowns.every((k) => knownHolds(core, k)));
+  if (agreeing.length === 0) throw overDetermined(knowns, chosen, isolated[0]!);
   return { solutions: agreeing.map((core) => toCompoundCurve(core, stations)) };
 }
 
@@ -77,6 +79,15 @@ function missingKnowns(knowns: Known[], rank: number): GeometryInputError {
       ? `need 4 independent knowns, got ${knowns.length}: ${names.join(", ") || "none"}`
       : `need 4 independent knowns; ${names.join(", ")} fix only ${rank} of R1, R2, Δ1, Δ2 (some follow from others, e.g. Δ = Δ1 + Δ2)`;
   return new GeometryInputError("missing_knowns", message, { field: "given", given: names, independent: rank });
+}
+
+function notDetermined(chosen: Known[]): GeometryInputError {
+  const names = chosen.map((k) => k.key).join(", ");
+  return new GeometryInputError(
+    "missing_knowns",
+    `${names} do not fix a single compound curve here: a whole family fits (for example R1 = R2 is a simple curve and any split of Δ works)`,
+    { field: "given", given: chosen.map((k) => k.key) },
+  );
 }
 
 function overDetermined(knowns: Known[], chosen: Known[], core: CompoundCore): GeometryInputError {
