@@ -152,3 +152,23 @@ test("the densified centreline stays within the chord tolerance of the arcs", ()
   const coarse = computeAlignmentGeometry(LINE, { chordTolerance: 1 });
   expect(coarse.centerline.coordinates.length).toBeLessThan(coords.length);
 });
+
+test("US-foot alignments print US stations and a gap equation skips stations", () => {
+  // Mahun OASL Curves A.2: 100-ft stations; station equation "back = ahead".
+  const input: AlignmentInput = {
+    units: "usft",
+    startStation: 1000,
+    points: [
+      { x: 0, y: 0 },
+      { x: 1000, y: 0, curve: { type: "simple", radius: 800 } },
+      { x: 1800, y: 700 },
+    ],
+    stationEquations: [{ back: 1500, ahead: 1600 }],
+  };
+  const g = computeAlignmentGeometry(input);
+  expect(g.stations[0]!.stationText).toBe("10+00.00");
+  const pt = g.stations.find((s) => s.label === "PT")!;
+  expect(pt.displayStation).toBeCloseTo(pt.station + 100, 9);
+  expect(pt.stationText).toMatch(/^\d+\+\d{2}\.\d{2}$/);
+  expect(() => locateStation(g, 1550)).toThrow(GeometryInputError);
+});
