@@ -1,7 +1,7 @@
 import { azimuthDegFromMathRad } from "./bearings";
 import { radToDeg } from "./angles";
 import type { AlignmentLegs } from "./alignment-legs";
-import type { AlignmentElement, ArcElement, TangentElement } from "./alignment-types";
+import type { ArcElement, TangentElement } from "./alignment-types";
 import type { ResolvedPiCurve } from "./pi-curves";
 import { addVec, distanceBetween, rotateVec, scaleVec, subVec, unitAtRad, type Vec2 } from "./vec2";
 
@@ -77,9 +77,4 @@ export function makeCurveArcs(legs: AlignmentLegs, i: number, curve: ResolvedPiC
   // Snap the PT to the forward tangent so the next tangent keeps the leg's exact direction.
   arcs[arcs.length - 1]!.end = pt;
   return arcs;
-}
-
-/** Total length of a list of elements. */
-export function sumLengths(elements: AlignmentElement[]): number {
-  return elements.reduce((s, e) => s + e.length, 0);
 }

@@ -63,8 +63,3 @@ export function learn(s: CompoundState, key: StateKey, value: number): boolean {
   s[key] = value;
   return true;
 }
-
-/** Count of how many state fields are known, to detect progress. */
-export function knownCount(s: CompoundState): number {
-  return Object.entries(s).filter(([k, v]) => k !== "parallel" && v !== undefined).length;
-}
