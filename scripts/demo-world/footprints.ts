@@ -38,7 +38,7 @@ export function lotFootprints(rng: Rng, plot: Plot, kind: "house" | "shop" | "wo
   const depthAvail = Math.abs(plot.vBack - plot.vFront);
   const side = kind === "shop" ? 0.6 : kind === "house" ? Math.min(3, frontage * 0.12) : 6;
   const setback = kind === "shop" ? rng.range(0.5, 2) : kind === "house" ? rng.range(5, 8) : rng.range(8, 14);
-  const width = kind === "house" ? Math.min(frontage - 2 * side, rng.range(9, 15)) : frontage - 2 * side;
+  const width = Math.min(frontage - 2 * side, kind === "house" ? rng.range(9, 15) : kind === "shop" ? 40 : rng.range(45, 75));
   const depth = Math.min(depthAvail - setback - 4, kind === "house" ? rng.range(9, 13) : kind === "shop" ? rng.range(14, 24) : rng.range(20, 45));
   if (width < 6 || depth < 6) return [];
   const uMid = (plot.uL + plot.uR) / 2 + (kind === "house" ? rng.range(-1, 1) * (frontage - 2 * side - width) / 2 : 0);

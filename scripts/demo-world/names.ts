@@ -7,7 +7,7 @@ import type { Rng } from "./prng";
 const GIVEN_START = ["Mar", "Tes", "Cor", "Ili", "Bren", "Ossi", "Fen", "Lio", "Thal", "Quen", "Rho", "Sev", "Ambr", "Del", "Wyn", "Ela", "Jor", "Nim", "Pell", "Cal"];
 const GIVEN_END = ["adel", "saly", "wen", "ric", "ora", "an", "ette", "ias", "wyn", "ira", "om", "elle", "o", "ard", "issa", "en"];
 const SUR_START = ["Quon", "Vor", "Tamb", "Harl", "Merr", "Osk", "Brin", "Dal", "Fenn", "Gorr", "Lask", "Penn", "Rask", "Strom", "Wick", "Yarr", "Cald", "Thorn", "Ember", "Ashv"];
-const SUR_END = ["sey", "ne", "erly", "wick", "ow", "ald", "ett", "ing", "mere", "by", "aker", "ton", "ridge", "ell", "oway", "ick"];
+const SUR_END = ["sey", "ne", "erly", "wick", "ow", "ald", "ett", "ing", "mere", "by", "aker", "ander", "ridge", "ell", "oway", "ick"];
 const STREET_START = ["Fenn", "Brind", "Wex", "Tally", "Quill", "Harrow", "Marl", "Osk", "Linden", "Copp", "Sorrel", "Ember", "Thistle", "Mallow", "Rook", "Teasel", "Alder", "Plover", "Cress", "Vetch", "Larch", "Bram", "Hazel", "Sedge"];
 const STREET_END = ["wick", "ley", "more", "ton", "ford", "stead", "holm", "by", "well", "combe", ""];
 const COMPANY = ["Holdings LLC", "Land Company", "Properties LLC", "Farms Inc", "Partners"];

@@ -22,7 +22,7 @@ const PUBLIC_OWNERS = { town: "Town of Quillmere", county: "Ostrand County", sch
 function rate(p: PlanParcel): [number, number] {
   const town = { core: 1, mid: 0.72, outer: 0.5, rural: 0.1 }[p.zone];
   switch (p.use) {
-    case "RES": return p.zone === "rural" ? [1.6, 42000] : [175 * town, 9000];
+    case "RES": return p.zone === "rural" ? [0.9, 42000] : [175 * town, 9000];
     case "COM": return [310 * town, 15000];
     case "IND": return [52, 20000];
     case "PUB": return p.zone === "rural" ? [0.9, 0] : [58, 0];

@@ -10,7 +10,7 @@ import type { LandUse, OwnerKind, PlanParcel, Zone } from "./plan-types";
 import { CREEK_HALF_WIDTH, creekV } from "./creek";
 import { cutRow, lotPlot, lotRing, mergeSome, type Back, type Cut } from "./town-lots";
 
-const FRONTAGE: Record<Exclude<Zone, "rural">, [number, number]> = { core: [10, 16], mid: [15, 26], outer: [22, 40] };
+const FRONTAGE: Record<Exclude<Zone, "rural">, [number, number]> = { core: [10, 16], mid: [14, 24], outer: [22, 40] };
 
 interface Block {
   book: number;
