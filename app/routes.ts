@@ -23,7 +23,13 @@ export default [
     route("curves/simple", "routes/api.v1.curves.simple.ts"),
     route("curves/compound", "routes/api.v1.curves.compound.ts"),
     route("alignments/geometry", "routes/api.v1.alignments.geometry.ts"),
+    route("projects", "routes/api.v1.projects.ts"),
+    route("projects/:projectId", "routes/api.v1.projects.$projectId.ts"),
+    route("projects/:projectId/layers", "routes/api.v1.projects.$projectId.layers.ts"),
+    route("projects/:projectId/layers/preview", "routes/api.v1.projects.$projectId.layers.preview.ts"),
+    route("layers/:layerId/features", "routes/api.v1.layers.$layerId.features.ts"),
   ]),
+  route("tiles/layers/:layerId/:z/:x/:y.pbf", "routes/tiles.layers.$layerId.$z.$x.$y.ts"),
   route("api/*", "routes/api.not-found.ts"),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { index, integer, primaryKey, real, sqliteTable, text } from "drizzle-orm/sqlite-core";
+import { index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { ROLES, type Role } from "../utils/roles";
 
 const createdAt = () =>
@@ -106,3 +106,89 @@ export const mailOutbox = sqliteTable(
 
 export type MailAttachment = { filename: string; contentType: string; content: string };
 
+
+/** Bounds [west, south, east, north] in WGS84 degrees. */
+export type BboxWgs84 = [number, number, number, number];
+
+/**
+ * One uploaded parcel or building layer. Layers are never edited: a new upload
+ * replaces the old one (status `replaced`, kept for history and audit).
+ */
+export const layers = sqliteTable(
+  "layers",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    projectId: integer("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: ["parcels", "buildings"] }).notNull(),
+    name: text("name").notNull(),
+    sourceFileName: text("source_file_name").notNull(),
+    format: text("format").notNull(),
+    // "EPSG:nnnn" when identified, else the CRS's own name from the file.
+    sourceCrs: text("source_crs").notNull(),
+    fieldMapping: text("field_mapping", { mode: "json" }).$type<Record<string, string | null>>().notNull(),
+    featureCount: integer("feature_count").notNull(),
+    bbox: text("bbox", { mode: "json" }).$type<BboxWgs84>().notNull(),
+    status: text("status", { enum: ["active", "replaced"] }).notNull().default("active"),
+    replacedByLayerId: integer("replaced_by_layer_id"),
+    createdBy: integer("created_by").references(() => users.id),
+    createdAt: createdAt(),
+    replacedAt: integer("replaced_at", { mode: "timestamp_ms" }),
+  },
+  (t) => [index("layers_project").on(t.projectId, t.kind, t.status)],
+);
+
+// Geometry columns hold GeoJSON geometry text; min/max are its bounds in the project's working CRS,
+// mirrored into an R*Tree (custom migration) by triggers.
+export const parcels = sqliteTable(
+  "parcels",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    layerId: integer("layer_id").notNull().references(() => layers.id, { onDelete: "cascade" }),
+    parcelId: text("parcel_id").notNull(),
+    owner: text("owner"),
+    address: text("address"),
+    landUse: text("land_use"),
+    landValue: real("land_value"),
+    landValueBasis: text("land_value_basis", { enum: ["total", "perArea"] }).notNull().default("total"),
+    attributes: text("attributes", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    geometry: text("geometry").notNull(),
+    geometryWgs84: text("geometry_wgs84").notNull(),
+    // Planar area in the working CRS, in the project's units squared.
+    area: real("area").notNull(),
+    minX: real("min_x").notNull(),
+    minY: real("min_y").notNull(),
+    maxX: real("max_x").notNull(),
+    maxY: real("max_y").notNull(),
+  },
+  (t) => [uniqueIndex("parcels_layer_parcel_id").on(t.layerId, t.parcelId)],
+);
+
+export const buildings = sqliteTable(
+  "buildings",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    layerId: integer("layer_id").notNull().references(() => layers.id, { onDelete: "cascade" }),
+    // The parcel ID the footprint file names, if any (text, not a row reference: layers are replaced independently).
+    parcelId: text("parcel_id"),
+    value: real("value"),
+    attributes: text("attributes", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    geometry: text("geometry").notNull(),
+    geometryWgs84: text("geometry_wgs84").notNull(),
+    area: real("area").notNull(),
+    minX: real("min_x").notNull(),
+    minY: real("min_y").notNull(),
+    maxX: real("max_x").notNull(),
+    maxY: real("max_y").notNull(),
+  },
+  (t) => [index("buildings_layer").on(t.layerId)],
+);
+
+/**
+ * When a project's land data last changed: take and cost results computed before `changedAt`
+ * are stale and must be recomputed (read by the impact calculation when it arrives).
+ */
+export const fabricChanges = sqliteTable("fabric_changes", {
+  projectId: integer("project_id").primaryKey().references(() => projects.id, { onDelete: "cascade" }),
+  changedAt: integer("changed_at", { mode: "timestamp_ms" }).notNull(),
+  layerId: integer("layer_id").references(() => layers.id, { onDelete: "set null" }),
+});

@@ -1,6 +1,7 @@
 import { and, asc, eq } from "drizzle-orm";
 import { projectMembers, projects, users } from "~/db/schema";
 import { db, type Db } from "~/utils/db.server";
+import { recordAuditEvent } from "./audit.server";
 import type { Role } from "~/utils/roles";
 
 export type Project = typeof projects.$inferSelect;
@@ -11,6 +12,15 @@ export function createProject(input: ProjectInput, creator: { id: number; role: 
   return tx.transaction((t) => {
     const project = t.insert(projects).values({ ...input, createdBy: creator.id }).returning().get();
     t.insert(projectMembers).values({ projectId: project.id, userId: creator.id, role: creator.role }).run();
+    return project;
+  });
+}
+
+/** Creates a project and records `project.created` in the same transaction (the API's path). */
+export function createProjectAudited(input: ProjectInput, creator: { id: number; role: Role }, tx: Db = db()): Project {
+  return tx.transaction((t) => {
+    const project = createProject(input, creator, t);
+    recordAuditEvent({ actorId: creator.id, projectId: project.id, action: "project.created", subject: project.name }, t);
     return project;
   });
 }
@@ -62,4 +72,9 @@ export function upsertProjectMember(projectId: number, userId: number, role: Rol
 
 export function removeProjectMember(projectId: number, userId: number, tx: Db = db()): void {
   tx.delete(projectMembers).where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, userId))).run();
+}
+
+/** The project as the API shows it. */
+export function toProjectJson(p: Project) {
+  return { id: p.id, name: p.name, description: p.description, units: p.units, crs: p.crs, scaleFactor: p.scaleFactor, createdBy: p.createdBy, createdAt: p.createdAt.toISOString() };
 }

@@ -1,0 +1,36 @@
+import type { ParcelUpload } from "~/fabric/index.server";
+import type { LayerUploadFields } from "~/schemas/layer-schemas";
+import type { MultipartUpload } from "~/utils/multipart-upload.server";
+import { readLayerUpload } from "~/utils/read-layer-upload.server";
+import { crsCode, ingestLayer } from "./layer-ingest.server";
+import { forgetLayerTiles } from "./layer-tiles.server";
+import type { Project } from "./projects.server";
+
+function summary(upload: ParcelUpload) {
+  return {
+    featureCount: upload.featureCount,
+    rejected: upload.rejected,
+    warnings: upload.warnings,
+    sourceCrs: crsCode(upload.sourceCrs),
+    sourceCrsName: upload.sourceCrs.name,
+    workingCrs: crsCode(upload.workingCrs),
+    workingCrsName: upload.workingCrs.name,
+    areaUnit: upload.areaUnit,
+    bbox: upload.bbox,
+  };
+}
+
+/** Reads, checks and stores an uploaded layer in one transaction; the answer of the upload route. */
+export async function commitLayerUpload(project: Project, user: { id: number }, upload: MultipartUpload, fields: LayerUploadFields) {
+  const read = await readLayerUpload(project, upload, fields);
+  const layer = ingestLayer(project, user, { name: fields.name, kind: fields.kind, sourceFileName: upload.file!.fileName, replacesLayerId: fields.replacesLayerId }, read);
+  forgetLayerTiles(layer.id);
+  if (fields.replacesLayerId !== undefined) forgetLayerTiles(fields.replacesLayerId);
+  return { id: layer.id, kind: layer.kind, name: layer.name, status: layer.status, ...summary(read), mapping: read.mapping, replacesLayerId: fields.replacesLayerId ?? null };
+}
+
+/** Reads and checks an upload without storing it: what the mapping screen shows before committing. */
+export async function previewLayerUpload(project: Project, upload: MultipartUpload, fields: Omit<LayerUploadFields, "name">) {
+  const read = await readLayerUpload(project, upload, fields);
+  return { fieldNames: read.fieldNames, sampleRows: read.sampleRows, mapping: read.mapping, format: read.format, ...summary(read) };
+}
