@@ -1,28 +1,29 @@
-import { evaluateCompoundCore } from "./compound-core";
-import { readKnown, type Known } from "./compound-knowns";
+import type { Known } from "./compound-knowns";
+import { unitCoefficientsAt } from "./compound-lean";
 import { crossVec, unitAtRad } from "./vec2";
 
 // With Δ1 and Δ2 fixed, the radii follow from the knowns by linear algebra (variable projection).
 
 /** Linear rows a·R1 + b·R2 = c from the knowns at fixed angles (the long chord is kept aside). */
 function linearRows(knowns: Known[], d1: number, d2: number): { rows: [number, number, number][]; chord?: number } {
-  const u1 = evaluateCompoundCore(1, 0, d1, d2);
-  const u2 = evaluateCompoundCore(0, 1, d1, d2);
+  const u = unitCoefficientsAt(d1, d2);
+  const p1: [number, number] = [u.p1x, u.p1y];
+  const p2: [number, number] = [u.p2x, u.p2y];
   const rows: [number, number, number][] = [];
   let chord: number | undefined;
   for (const k of knowns) {
     if (k.key === "longChord") chord = k.value;
-    else if (k.kind === "length") rows.push([readKnown(u1, k.key) / k.value, readKnown(u2, k.key) / k.value, 1]);
+    else if (k.kind === "length") rows.push([u.coefficient(k.key, 0) / k.value, u.coefficient(k.key, 1) / k.value, 1]);
     else {
       const phi = k.key === "chordAnglePC" ? k.value : k.key === "chordAnglePT" ? d1 + d2 - k.value : d1;
       const dir = unitAtRad(phi);
-      const [a, b] = [crossVec(u1.pt, dir), crossVec(u2.pt, dir)];
+      const [a, b] = [crossVec(p1, dir), crossVec(p2, dir)];
       const n = Math.hypot(a, b) || 1;
       rows.push([a / n, b / n, 0]);
     }
   }
   const distinct = dropParallelRows(rows);
-  if (chord !== undefined && distinct.length < 2) distinct.push(...chordRowsFor(distinct[0], u1.pt, u2.pt, chord));
+  if (chord !== undefined && distinct.length < 2) distinct.push(...chordRowsFor(distinct[0], p1, p2, chord));
   return chord === undefined ? { rows: distinct } : { rows: distinct, chord };
 }
 
@@ -53,8 +54,9 @@ export function solveRadiiWithChord(knowns: Known[], d1: number, d2: number): [n
   const { rows, chord } = linearRows(knowns, d1, d2);
   const row = rows[0];
   if (chord === undefined || rows.length !== 1 || !row || row[2] === 0) return undefined;
-  const u1 = evaluateCompoundCore(1, 0, d1, d2).pt;
-  const u2 = evaluateCompoundCore(0, 1, d1, d2).pt;
+  const u = unitCoefficientsAt(d1, d2);
+  const u1 = [u.p1x, u.p1y] as const;
+  const u2 = [u.p2x, u.p2y] as const;
   const [a, b, c] = row;
   const r0: [number, number] = [(c * a) / (a * a + b * b), (c * b) / (a * a + b * b)];
   const n: [number, number] = [-b, a];
@@ -75,19 +77,25 @@ export function solveRadiiWithChord(knowns: Known[], d1: number, d2: number): [n
 /** Least squares for (R1, R2) by Gram–Schmidt QR on unit-scaled rows (normal equations lose digits). */
 export function solveRadii(knowns: Known[], d1: number, d2: number): [number, number] | undefined {
   const { rows } = linearRows(knowns, d1, d2);
-  const scaled = rows.map(([a, b, c]) => {
-    const h = Math.hypot(a, b) || 1;
-    return [a / h, b / h, c / h] as const;
-  });
-  const r11 = Math.hypot(...scaled.map((r) => r[0]));
+  // Loops, not map/reduce: this runs for every cell of the numerical scan.
+  let r11sq = 0;
+  for (const r of rows) r11sq += (r[0] * r[0]) / (r[0] * r[0] + r[1] * r[1] || 1);
+  const r11 = Math.sqrt(r11sq);
   if (!(r11 > 0)) return undefined;
-  const q1 = scaled.map((r) => r[0] / r11);
-  const r12 = scaled.reduce((s, r, i) => s + q1[i]! * r[1], 0);
-  const v = scaled.map((r, i) => r[1] - r12 * q1[i]!);
-  const r22 = Math.hypot(...v);
+  let r12 = 0;
+  for (const [a, b] of rows) r12 += (a * b) / (r11 * (a * a + b * b || 1));
+  let r22sq = 0;
+  let q1c = 0;
+  for (const [a, b, c] of rows) {
+    const h2 = a * a + b * b || 1;
+    const v = (b - (r12 * a) / r11) / Math.sqrt(h2);
+    r22sq += v * v;
+    q1c += (a * c) / (r11 * h2);
+  }
+  const r22 = Math.sqrt(r22sq);
   if (!(r22 > 1e-12)) return undefined;
-  const q2 = v.map((x) => x / r22);
-  const x2 = scaled.reduce((s, r, i) => s + q2[i]! * r[2], 0) / r22;
-  const x1 = (scaled.reduce((s, r, i) => s + q1[i]! * r[2], 0) - r12 * x2) / r11;
-  return [x1, x2];
+  let q2c = 0;
+  for (const [a, b, c] of rows) q2c += ((b - (r12 * a) / r11) * c) / (r22 * (a * a + b * b || 1));
+  const x2 = q2c / r22;
+  return [(q1c - r12 * x2) / r11, x2];
 }
