@@ -65,12 +65,14 @@ function parseInto(dir: string, body: NodeWebStream<Uint8Array>, contentType: st
       const out = createWriteStream(path);
       stream.on("data", (chunk: Buffer) => (current.size += chunk.length));
       stream.on("limit", () => {
-        out.destroy();
+        // Unpipe before closing the temp file, or a write already in flight lands on a destroyed stream.
+        stream.unpipe(out);
+        out.end();
         fail(uploadTooLarge(maxBytes));
       });
       written = new Promise((res, rej) => {
         out.on("finish", res);
-        out.on("error", rej);
+        out.on("error", (e) => (settled ? res() : rej(e)));
       });
       stream.pipe(out);
     });
