@@ -14,7 +14,7 @@ if (build.status !== 0) process.exit(build.status ?? 1);
 
 const { seedDemo } = await import("../app/models/demo-seed.server");
 const seeded = await seedDemo();
-console.log(`Demo scenario ready: ${seeded.users} accounts, project #${seeded.projectId}.`);
+console.log(`Demo scenario ready: ${seeded.users} accounts, project #${seeded.projectId}, ${seeded.features} features loaded.`);
 
 // The server's own binary rather than npx, so signals reach it directly.
 const server = spawn(join("node_modules", ".bin", "react-router-serve"), ["./build/server/index.js"], {

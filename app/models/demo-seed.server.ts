@@ -1,6 +1,7 @@
 import { hashPassword } from "~/utils/password.server";
 import { db } from "~/utils/db.server";
 import { recordAuditEvent } from "./audit.server";
+import { seedDemoFabric } from "./demo-fabric.server";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "./demo-accounts";
 import { createProject, findProjectByName, upsertProjectMember } from "./projects.server";
 import { findUserByEmail, insertUser, setUserPassword, updateUserProfile } from "./users.server";
@@ -12,8 +13,14 @@ export const DEMO_PROJECT = {
   units: "m" as const,
 };
 
-/** Creates or refreshes the demo users and project. Safe to run any number of times. */
-export async function seedDemo(): Promise<{ users: number; projectId: number }> {
+/** Creates or refreshes the demo users, project and parcel fabric. Safe to run any number of times. */
+export async function seedDemo(): Promise<{ users: number; projectId: number; features: number }> {
+  const seeded = await seedDemoAccounts();
+  const features = await seedDemoFabric(DEMO_PROJECT.name, seeded.plannerId);
+  return { users: seeded.users, projectId: seeded.projectId, features };
+}
+
+async function seedDemoAccounts() {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   return db().transaction((tx) => {
     const ids = DEMO_ACCOUNTS.map((account) => {
@@ -28,6 +35,6 @@ export async function seedDemo(): Promise<{ users: number; projectId: number }> 
     const project = findProjectByName(DEMO_PROJECT.name, tx) ?? createProject(DEMO_PROJECT, { id: plannerId, role: "planner" }, tx);
     DEMO_ACCOUNTS.forEach((account, i) => upsertProjectMember(project.id, ids[i]!, account.role, tx));
     recordAuditEvent({ actorId: null, projectId: project.id, action: "demo.seeded", subject: DEMO_PROJECT.name }, tx);
-    return { users: ids.length, projectId: project.id };
+    return { users: ids.length, projectId: project.id, plannerId };
   });
 }

@@ -14,6 +14,10 @@ import { readForm } from "~/utils/form.server";
 import { requireUser } from "~/utils/permissions.server";
 import { ROLE_LABELS, ROLES, type Role } from "~/utils/roles";
 import { UNIT_LABELS } from "~/utils/unit-labels";
+import { ProjectMap } from "~/components/map/project-map";
+import { LayerUpload } from "~/components/upload/layer-upload";
+import { listProjectLayers } from "~/models/layers.server";
+import { env } from "~/utils/env.server";
 
 const MemberChangeSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("add-member"), email: EmailSchema, role: z.enum(ROLES) }),
@@ -36,7 +40,17 @@ export function meta({ data: d }: Route.MetaArgs) {
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { user, project } = await loadProject(request, params, ACCESS.projects);
-  return { project, members: listProjectMembers(project.id), mayManage: user.role === "planner" || user.role === "admin" };
+  const layers = listProjectLayers(project.id)
+    .filter((l) => l.status === "active")
+    .map((l) => ({ id: l.id, kind: l.kind, name: l.name, bbox: l.bbox, featureCount: l.featureCount, sourceCrs: l.sourceCrs }));
+  return {
+    project,
+    layers,
+    members: listProjectMembers(project.id),
+    mayManage: user.role === "planner" || user.role === "admin",
+    mayUpload: user.role === "planner",
+    basemapStyleUrl: env().BASEMAP_STYLE_URL,
+  };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -57,7 +71,8 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function ProjectPage() {
-  const { project, members, mayManage } = useLoaderData<typeof loader>();
+  const { project, layers, members, mayManage, mayUpload, basemapStyleUrl } = useLoaderData<typeof loader>();
+  const areaUnit = project.units === "m" ? "m²" : project.units === "ft" ? "ft²" : "US ft²";
   const result = useActionData<typeof action>();
   return (
     <div className="space-y-6">
@@ -71,6 +86,33 @@ export default function ProjectPage() {
           <div><dt className="text-label text-ink-soft">Working CRS</dt><dd>{project.crs ?? "from first layer"}</dd></div>
           <div><dt className="text-label text-ink-soft">Combined scale factor</dt><dd>{project.scaleFactor ?? "none (grid values only)"}</dd></div>
         </dl>
+      </Card>
+      <Card title="Map">
+        {layers.length === 0 ? (
+          <p className="text-sm text-ink-soft">No parcel fabric yet. {mayUpload ? "Upload one below." : "A planner uploads it."}</p>
+        ) : (
+          <ProjectMap layers={layers} basemapStyleUrl={basemapStyleUrl} areaUnit={areaUnit} />
+        )}
+        <p className="mt-3 text-xs text-ink-soft">Areas are computed in the working CRS{project.crs ? ` (${project.crs})` : ""} from the uploaded fabric; they are not surveyed areas.</p>
+      </Card>
+      <Card title="Layers">
+        <Table
+          rows={layers}
+          rowKey={(l) => l.id}
+          empty="No layers yet."
+          columns={[
+            { header: "Layer", cell: (l) => l.name },
+            { header: "Holds", cell: (l) => (l.kind === "parcels" ? "parcels" : "building footprints") },
+            { header: "Features", cell: (l) => l.featureCount.toLocaleString(), align: "right" },
+            { header: "Source CRS", cell: (l) => l.sourceCrs },
+          ]}
+        />
+        {mayUpload && (
+          <div className="mt-6 border-t border-rule pt-4">
+            <h3 className="mb-3 font-semibold">Upload a layer</h3>
+            <LayerUpload projectId={project.id} />
+          </div>
+        )}
       </Card>
       <Card title="Members">
         <Table

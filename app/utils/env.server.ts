@@ -14,6 +14,8 @@ const EnvSchema = z.object({
   // Base URL used in e-mailed links; defaults to the URL of the request that caused the mail.
   PUBLIC_URL: z.string().url().optional(),
   MAIL_POLL_MS: z.coerce.number().int().min(50).default(1000),
+  // The map's basemap style; the default is the invented demo basemap that ships with the app.
+  BASEMAP_STYLE_URL: z.string().min(1).default("/tiles/basemap-style.json"),
 });
 
 export type Env = z.infer<typeof EnvSchema>;

@@ -1,7 +1,7 @@
-import { LAND_USE_COLOURS, VALUE_LEGEND, type ParcelColouring } from "./parcel-styles";
+import { LAND_USE_CLASSES, VALUE_LEGEND, type ParcelColouring } from "./parcel-styles";
 
 export function MapLegend({ colouring, valueUnit }: { colouring: ParcelColouring; valueUnit: string }) {
-  const items = colouring === "landUse" ? Object.entries(LAND_USE_COLOURS).map(([label, colour]) => ({ label, colour })) : VALUE_LEGEND;
+  const items = colouring === "landUse" ? LAND_USE_CLASSES : VALUE_LEGEND;
   return (
     <div className="absolute bottom-8 left-3 z-10 rounded-md bg-sheet/95 p-3 text-xs shadow-sheet" aria-label="Legend">
       <p className="mb-1 font-semibold">{colouring === "landUse" ? "Land use" : `Land value per ${valueUnit}`}</p>

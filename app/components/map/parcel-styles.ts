@@ -1,21 +1,22 @@
 import type { ExpressionSpecification } from "maplibre-gl";
 
-/** Land-use classes the demo and the usual county codes map to, with our colours. */
-export const LAND_USE_COLOURS: Record<string, string> = {
-  residential: "#e8c9a0",
-  commercial: "#d9a3a0",
-  industrial: "#b9aed6",
-  agricultural: "#cbdca4",
-  public: "#a9cfd8",
-  vacant: "#e6e2d6",
-};
+/** Land-use classes with our colours, and the codes county files commonly use for each (common practice). */
+export const LAND_USE_CLASSES = [
+  { label: "residential", colour: "#e8c9a0", codes: ["residential", "res", "r"] },
+  { label: "commercial", colour: "#d9a3a0", codes: ["commercial", "com", "c"] },
+  { label: "industrial", colour: "#b9aed6", codes: ["industrial", "ind", "i"] },
+  { label: "agricultural", colour: "#cbdca4", codes: ["agricultural", "agr", "ag", "a"] },
+  { label: "public", colour: "#a9cfd8", codes: ["public", "pub", "p", "exempt"] },
+  { label: "vacant", colour: "#ebe7dc", codes: ["vacant", "vac", "v"] },
+];
 const OTHER = "#d8d3c4";
 
 export type ParcelColouring = "landUse" | "landValue";
 
 export function parcelFillColour(by: ParcelColouring): ExpressionSpecification {
   if (by === "landUse") {
-    return ["match", ["downcase", ["to-string", ["get", "landUse"]]], ...Object.entries(LAND_USE_COLOURS).flat(), OTHER] as unknown as ExpressionSpecification;
+    const arms = LAND_USE_CLASSES.flatMap((c) => [c.codes, c.colour]);
+    return ["match", ["downcase", ["to-string", ["get", "landUse"]]], ...arms, OTHER] as unknown as ExpressionSpecification;
   }
   // Value per square unit, so a big cheap field and a small dear lot compare fairly.
   return [

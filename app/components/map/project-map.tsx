@@ -81,17 +81,18 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
         >
           <NavigationControl position="top-left" showCompass={false} />
           <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />
-          {layers.map((l) => (
+          {/* Parcels first so building footprints draw on top of them. */}
+          {[...layers].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === "parcels" ? -1 : 1)).map((l) => (
             <Source key={l.id} id={`layer-${l.id}`} type="vector" tiles={[`${origin}/tiles/layers/${l.id}/{z}/{x}/{y}.pbf`]} minzoom={0} maxzoom={18}>
               {l.kind === "parcels" ? (
                 <>
-                  <Layer id={`parcels-fill-${l.id}`} type="fill" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                  <Layer id={`parcels-fill-${l.id}`} source={`layer-${l.id}`} type="fill" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
                     paint={{ "fill-color": parcelFillColour(colouring), "fill-opacity": ["case", ["boolean", ["feature-state", "hover"], false], 0.9, 0.6] }} />
-                  <Layer id={`parcels-line-${l.id}`} type="line" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                  <Layer id={`parcels-line-${l.id}`} source={`layer-${l.id}`} type="line" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
                     paint={{ "line-color": "#5b5446", "line-width": ["interpolate", ["linear"], ["zoom"], 12, 0.3, 17, 1.2] }} />
                 </>
               ) : (
-                <Layer id={`buildings-${l.id}`} type="fill" source-layer="buildings" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
+                <Layer id={`buildings-${l.id}`} source={`layer-${l.id}`} type="fill" source-layer="buildings" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
                   paint={{ "fill-color": "#6f675a", "fill-opacity": 0.85 }} />
               )}
             </Source>
