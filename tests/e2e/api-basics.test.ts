@@ -1,4 +1,4 @@
-import { expect, test } from "vitest";
+import { expect, inject, test } from "vitest";
 import { get, postJson, sessionCookie } from "./support/http";
 import { waitForMail } from "./support/mail";
 
@@ -63,4 +63,15 @@ test("unknown API paths answer 404 in JSON, never HTML", async () => {
   expect(res.status).toBe(404);
   expect(res.headers.get("content-type")).toContain("application/json");
   expect(await res.json()).toMatchObject({ error: { code: "not_found" } });
+});
+
+test("a form over its size limit is refused with 413 and a message, and nothing is done", async () => {
+  const res = await fetch(`${inject("baseUrl")}/forgot-password`, {
+    method: "POST",
+    body: new URLSearchParams({ email: "planner@demo.test", filler: "x".repeat(70 * 1024) }),
+    redirect: "manual",
+  });
+  expect(res.status).toBe(413);
+  expect(await res.text()).toContain("larger than 64 KB");
+  await expect(waitForMail("planner@demo.test", /reset/i, 1500)).rejects.toThrow(/no mail/);
 });
