@@ -69,7 +69,10 @@ export default async function setup(project: TestProject) {
     if (child.exitCode === null) {
       const exited = new Promise((r) => child.once("exit", r));
       child.kill("SIGTERM");
+      // A server that does not stop within 10 s is killed, so a test run can never hang here.
+      const killer = setTimeout(() => child.kill("SIGKILL"), 10_000);
       await exited;
+      clearTimeout(killer);
     }
     rmSync(dir, { recursive: true, force: true });
   };
