@@ -46,7 +46,7 @@ export function shapefileZip(rows: WktRow[], srs: string, edit: { drop?: string[
   }
 }
 
-/** Reprojects a Shapefile zip's layer with GDAL (ogr2ogr -t_srs) and returns its GeoJSON, the reference geometry. */
+/** Writes the rows as a Shapefile with GDAL, reprojects it with ogr2ogr -t_srs and returns the GeoJSON: the reference geometry. */
 export function gdalReprojected(rows: WktRow[], srs: string, targetSrs: string): { features: { geometry: unknown; properties: Record<string, unknown> }[] } {
   const { dir, cleanup } = tempDir();
   try {
