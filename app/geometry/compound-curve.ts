@@ -1,8 +1,8 @@
-import { degToRad, radToDeg } from "./angles";
+import { radToDeg } from "./angles";
 import { evaluateCompoundCore, type CompoundCore } from "./compound-core";
 import { GeometryInputError } from "./errors";
 import type { Vec2 } from "./vec2";
-import { requireCurveAngleRad, requireFinite, requirePositive } from "./validate";
+import { requireArcPair, requireCurveAngleRad, requireFinite } from "./validate";
 
 /**
  * A two-centred compound curve, arc 1 first along stationing. Lengths in working units; every
@@ -101,10 +101,7 @@ export interface CompoundCurveInput extends CompoundStationInput {
  * Engineering Surveying 6th ed. §10.3). Throws `GeometryInputError` for bad radii or angles.
  */
 export function computeCompoundCurve(input: CompoundCurveInput): CompoundCurve {
-  const r1 = requirePositive(input.radius1, "radius1", "a positive number of length units");
-  const r2 = requirePositive(input.radius2, "radius2", "a positive number of length units");
-  const d1 = requireCurveAngleRad(degToRad(requireFinite(input.delta1, "delta1")), "delta1");
-  const d2 = requireCurveAngleRad(degToRad(requireFinite(input.delta2, "delta2")), "delta2");
+  const { r1, r2, d1, d2 } = requireArcPair(input);
   requireCurveAngleRad(d1 + d2, "delta");
   return toCompoundCurve(evaluateCompoundCore(r1, r2, d1, d2), input);
 }

@@ -1,8 +1,8 @@
-import { degToRad, radToDeg } from "./angles";
+import { radToDeg } from "./angles";
 import { makeArc } from "./alignment-elements";
 import type { ArcElement } from "./alignment-types";
 import { GeometryInputError } from "./errors";
-import { requireCurveAngleRad, requireFinite, requirePositive } from "./validate";
+import { requireArcPair, requireFinite } from "./validate";
 import { addVec, scaleVec, unitAtRad, type Vec2 } from "./vec2";
 
 /** Inputs of {@link computeReverseCurve}; angles in decimal degrees (unsigned). */
@@ -38,10 +38,7 @@ export interface ReverseCurve {
  * Schofield & Breach §10.3; FM 5-233 ch. 3 advises against them except when necessary).
  */
 export function computeReverseCurve(input: ReverseCurveInput): ReverseCurve {
-  const r1 = requirePositive(input.radius1, "radius1", "a positive number of length units");
-  const r2 = requirePositive(input.radius2, "radius2", "a positive number of length units");
-  const d1 = requireCurveAngleRad(degToRad(requireFinite(input.delta1, "delta1")), "delta1");
-  const d2 = requireCurveAngleRad(degToRad(requireFinite(input.delta2, "delta2")), "delta2");
+  const { r1, r2, d1, d2 } = requireArcPair(input);
   const tangent = requireFinite(input.tangentLength ?? 0, "tangentLength");
   if (tangent < 0) throw new GeometryInputError("out_of_range", `tangentLength must be 0 or more, got ${tangent}`, { field: "tangentLength" });
   const sign: 1 | -1 = (input.firstDirection ?? "left") === "left" ? 1 : -1;

@@ -1,3 +1,4 @@
+import { degToRad } from "./angles";
 import { GeometryInputError } from "./errors";
 
 /** Throws `invalid_number` unless `value` is a finite number. Returns it typed. */
@@ -36,4 +37,14 @@ export function requireCurveAngleRad(deltaRad: number, field: string): number {
 /** Rounds a number for an error message without hiding its sign or magnitude. */
 export function roundForMessage(value: number): string {
   return Number.isFinite(value) ? String(Number(value.toPrecision(10))) : String(value);
+}
+
+/** The two radii and central angles (degrees in, radians out) of a two-arc curve, each checked. */
+export function requireArcPair(input: { radius1: number; radius2: number; delta1: number; delta2: number }) {
+  return {
+    r1: requirePositive(input.radius1, "radius1", "a positive number of length units"),
+    r2: requirePositive(input.radius2, "radius2", "a positive number of length units"),
+    d1: requireCurveAngleRad(degToRad(requireFinite(input.delta1, "delta1")), "delta1"),
+    d2: requireCurveAngleRad(degToRad(requireFinite(input.delta2, "delta2")), "delta2"),
+  };
 }
