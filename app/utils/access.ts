@@ -7,6 +7,8 @@ import type { Role } from "./roles";
 export const ACCESS = {
   projects: ["admin", "planner", "manager", "analyst"],
   createProject: ["planner"],
+  editAlternatives: ["planner"],
+  takesApi: ["admin", "planner", "manager", "analyst"],
   workList: ["agent"],
   manageUsers: ["admin"],
   devMail: ["admin"],

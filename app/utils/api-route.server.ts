@@ -25,12 +25,12 @@ export function apiHandler<A extends { request: Request }>(fn: (args: A) => Prom
 }
 
 /** Reads and validates a JSON body; throws the envelope for a missing, oversized, malformed or invalid body. */
-export async function readJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.infer<S>> {
+export async function readJsonBody<S extends z.ZodType>(request: Request, schema: S, maxBytes = MAX_JSON_BYTES): Promise<z.infer<S>> {
   // Answering before the body is read leaves its bytes on the socket: close the connection with the answer.
-  const tooLarge = () => apiError("payload_too_large", `The body is over ${MAX_JSON_BYTES} bytes.`, undefined, { Connection: "close" });
-  if (Number(request.headers.get("content-length") ?? "0") > MAX_JSON_BYTES) throw tooLarge();
+  const tooLarge = () => apiError("payload_too_large", `The body is over ${maxBytes} bytes.`, undefined, { Connection: "close" });
+  if (Number(request.headers.get("content-length") ?? "0") > maxBytes) throw tooLarge();
   const text = await request.text();
-  if (Buffer.byteLength(text) > MAX_JSON_BYTES) throw tooLarge();
+  if (Buffer.byteLength(text) > maxBytes) throw tooLarge();
   let raw: unknown;
   try {
     raw = JSON.parse(text);
