@@ -1,6 +1,7 @@
 import { stationingOf, type AlignmentElement, type AlignmentGeometry, type AlignmentInput, type LengthUnit, type Vec2 } from "../geometry";
 import { unitsNode } from "./landxml-units";
-import { formatXmlNumber, serializeXml, type XmlNode } from "./xml-write";
+import { formatPlainNumber } from "./plain-number";
+import { serializeXml, type XmlNode } from "./xml-write";
 
 /** The LandXML 1.2 namespace (LandXML-1.2.xsd targetNamespace). */
 export const LANDXML_NAMESPACE = "http://www.landxml.org/schema/LandXML-1.2";
@@ -25,7 +26,7 @@ export interface LandXmlAlignmentExport {
 
 /** LandXML point text is "northing easting" (XSD PointType: "north east"), i.e. y before x. */
 function pointText(p: Vec2): string {
-  return `${formatXmlNumber(p[1])} ${formatXmlNumber(p[0])}`;
+  return `${formatPlainNumber(p[1])} ${formatPlainNumber(p[0])}`;
 }
 
 /**

@@ -1,3 +1,5 @@
+import { formatPlainNumber } from "./plain-number";
+
 /** An element to serialize: attributes in the given order (undefined ones left out), then text or children. */
 export interface XmlNode {
   name: string;
@@ -11,22 +13,11 @@ export function escapeXml(value: string): string {
   return value.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 }
 
-/**
- * Formats a number for a data file: at most `decimals` decimals, trailing zeros dropped, never
- * exponent notation and never "-0". Default 10 decimals keeps 0.1 nm at coordinates near 10^7.
- */
-export function formatXmlNumber(value: number, decimals = 10): string {
-  if (!Number.isFinite(value)) throw new Error(`cannot write the non-finite number ${value}`);
-  const fixed = value.toFixed(decimals);
-  const trimmed = fixed.includes(".") ? fixed.replace(/0+$/, "").replace(/\.$/, "") : fixed;
-  return trimmed === "-0" ? "0" : trimmed;
-}
-
 function attrText(attrs: XmlNode["attrs"]): string {
   if (!attrs) return "";
   return Object.entries(attrs)
     .filter((e): e is [string, string | number] => e[1] !== undefined)
-    .map(([k, v]) => ` ${k}="${escapeXml(typeof v === "number" ? formatXmlNumber(v) : v)}"`)
+    .map(([k, v]) => ` ${k}="${escapeXml(typeof v === "number" ? formatPlainNumber(v) : v)}"`)
     .join("");
 }
 
