@@ -25,7 +25,7 @@ export interface MappingOptions {
 }
 
 const text = z.string().trim().min(1).nullable();
-const schemaFor = (kind: MappingOptions["kind"]) =>
+const buildSchema = (kind: MappingOptions["kind"]) =>
   z.object({
     parcelId: kind === "parcels" ? z.string({ error: "parcel ID is missing" }).trim().min(1, "parcel ID is missing") : text,
     owner: text,
@@ -33,6 +33,8 @@ const schemaFor = (kind: MappingOptions["kind"]) =>
     landUse: text,
     landValue: z.number().finite().nonnegative("land value is negative").nullable(),
   });
+// Built once: zod compiles a schema on first use, which per row cost more than all the geometry work.
+const SCHEMAS = { parcels: buildSchema("parcels"), buildings: buildSchema("buildings") };
 
 function textOf(v: unknown): string | null {
   if (v === null || v === undefined) return null;
@@ -56,7 +58,7 @@ function mapOne(f: AreaFeature, mapping: FieldMapping, options: MappingOptions):
     landUse: textOf(sourceValue(f, mapping.landUse)),
     landValue: land.value,
   };
-  const parsed = schemaFor(options.kind).safeParse(candidate);
+  const parsed = SCHEMAS[options.kind].safeParse(candidate);
   if (!parsed.success) return parsed.error.issues.map((i) => i.message).join("; ");
   return { ...parsed.data, parcelId: parsed.data.parcelId ?? null, landValueBasis: options.landValueBasis, attributes: f.properties };
 }
