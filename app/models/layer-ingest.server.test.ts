@@ -2,7 +2,7 @@ import { readdirSync } from "node:fs";
 import { join } from "node:path";
 import { count, eq, sql } from "drizzle-orm";
 import { expect, test } from "vitest";
-import { fabricChanges, layers, parcels } from "~/db/schema";
+import { buildings, fabricChanges, layers, parcels } from "~/db/schema";
 import { readParcelUpload, type ParcelUpload } from "~/fabric/index.server";
 import { QUILLMERE_ROWS } from "~/fabric/test-support/quillmere-parcels";
 import { ogrFromRows, shapely, tempDir, zipFiles } from "~/fabric/test-support/reference-tools.server";
@@ -108,4 +108,32 @@ test("bbox searches through the R*Tree find exactly the parcels whose envelopes 
       expect(listLayerFeatures(layer, saved, { crs, bbox: box }).features.map((f) => f.id)).toEqual(expected);
     }
   }
+});
+
+test("a layer of more rows than one insert statement holds is stored row for row, with an R*Tree box for each", async () => {
+  const { planner, project, upload } = await setUp();
+  // 1,203 parcels: two full 500-row statements and a 203-row remainder; each copy shifted 100 ft east.
+  const shift = (g: ParcelUpload["features"][number]["geometry"], dx: number) => JSON.parse(JSON.stringify(g).replace(/\[(-?[\d.e+-]+),/g, (_, x: string) => `[${Number(x) + dx},`));
+  const features = Array.from({ length: 1203 }, (_, i) => {
+    const f = upload.features[i % 3]!;
+    return { ...f, parcelId: `QM-${i}`, geometry: shift(f.geometry, 100 * i) };
+  });
+  const layer = ingestLayer(project, planner, { name: "many", kind: "parcels", sourceFileName: "many.zip" }, { ...upload, features, featureCount: features.length });
+  const stored = db().select().from(parcels).where(eq(parcels.layerId, layer.id)).orderBy(parcels.id).all();
+  expect(stored.map((p) => p.parcelId)).toEqual(features.map((f) => f.parcelId));
+  expect(stored.map((p) => JSON.parse(p.geometry))).toEqual(features.map((f) => f.geometry));
+  expect(stored.map((p) => [p.owner, p.area, p.attributes])).toEqual(features.map((f) => [f.owner, f.area, f.attributes]));
+  const boxes = new Map(rtreeRows().map((b) => [b.id, b]));
+  for (const p of stored) {
+    const b = boxes.get(p.id)!;
+    expect(b.min_x <= p.minX && b.max_x >= p.maxX && b.min_y <= p.minY && b.max_y >= p.maxY).toBe(true);
+  }
+});
+
+test("a buildings layer stores its footprints with the parcel ID and value they name", async () => {
+  const { planner, project, upload } = await setUp();
+  const layer = ingestLayer(project, planner, { name: "footprints", kind: "buildings", sourceFileName: "b.zip" }, upload);
+  const stored = db().select().from(buildings).where(eq(buildings.layerId, layer.id)).orderBy(buildings.id).all();
+  expect(stored.map((b) => [b.parcelId, b.value, b.area])).toEqual(upload.features.map((f) => [f.parcelId, f.landValue, f.area]));
+  expect(stored.map((b) => JSON.parse(b.geometryWgs84))).toEqual(upload.features.map((f) => f.geometryWgs84));
 });

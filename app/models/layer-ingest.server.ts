@@ -1,9 +1,10 @@
 import { eq } from "drizzle-orm";
-import type { Position } from "geojson";
-import { buildings, fabricChanges, layers, parcels, projects } from "~/db/schema";
-import type { AreaGeometry, ParcelUpload, UploadedFeature } from "~/fabric/index.server";
+import { fabricChanges, layers, projects } from "~/db/schema";
+import type { ParcelUpload } from "~/fabric/index.server";
 import { db, type Db } from "~/utils/db.server";
 import { recordAuditEvent } from "./audit.server";
+import { insertLayerFeatures } from "./layer-feature-insert.server";
+export { boundsOf } from "./layer-feature-insert.server";
 import { findReplaceableLayer, type Layer, type LayerKind } from "./layers.server";
 import type { Project } from "./projects.server";
 
@@ -17,39 +18,6 @@ export interface LayerMeta {
   kind: LayerKind;
   sourceFileName: string;
   replacesLayerId?: number | undefined;
-}
-
-/** Rows per INSERT: 16 columns × 500 stays far under SQLite's bound-parameter limit. */
-const BATCH = 500;
-
-/** Bounds [minX, minY, maxX, maxY] of a polygon or multipolygon. */
-export function boundsOf(geometry: AreaGeometry): [number, number, number, number] {
-  const b: [number, number, number, number] = [Infinity, Infinity, -Infinity, -Infinity];
-  const rings: Position[][] = geometry.type === "Polygon" ? geometry.coordinates : geometry.coordinates.flat();
-  for (const p of rings.flat()) {
-    b[0] = Math.min(b[0], p[0]!);
-    b[1] = Math.min(b[1], p[1]!);
-    b[2] = Math.max(b[2], p[0]!);
-    b[3] = Math.max(b[3], p[1]!);
-  }
-  return b;
-}
-
-function shared(f: UploadedFeature) {
-  const [minX, minY, maxX, maxY] = boundsOf(f.geometry);
-  return { attributes: f.attributes, geometry: JSON.stringify(f.geometry), geometryWgs84: JSON.stringify(f.geometryWgs84), area: f.area, minX, minY, maxX, maxY };
-}
-
-function insertFeatures(t: Db, layerId: number, kind: LayerKind, features: UploadedFeature[]): void {
-  for (let i = 0; i < features.length; i += BATCH) {
-    const batch = features.slice(i, i + BATCH);
-    if (kind === "parcels") {
-      // applyFieldMapping guarantees a unique, non-empty parcel ID for every parcel.
-      t.insert(parcels).values(batch.map((f) => ({ layerId, parcelId: f.parcelId!, owner: f.owner, address: f.address, landUse: f.landUse, landValue: f.landValue, landValueBasis: f.landValueBasis, ...shared(f) }))).run();
-    } else {
-      t.insert(buildings).values(batch.map((f) => ({ layerId, parcelId: f.parcelId, value: f.landValue, ...shared(f) }))).run();
-    }
-  }
 }
 
 export const crsCode = (crs: { epsg?: number; name: string }) => (crs.epsg === undefined ? crs.name : `EPSG:${crs.epsg}`);
@@ -82,7 +50,7 @@ export function ingestLayer(project: Project, user: { id: number }, meta: LayerM
       })
       .returning()
       .get();
-    insertFeatures(t, layer.id, meta.kind, upload.features);
+    insertLayerFeatures(t, layer.id, meta.kind, upload.features);
     const now = new Date();
     if (replaced) t.update(layers).set({ status: "replaced", replacedAt: now, replacedByLayerId: layer.id }).where(eq(layers.id, replaced.id)).run();
     t.insert(fabricChanges).values({ projectId: project.id, changedAt: now, layerId: layer.id })
