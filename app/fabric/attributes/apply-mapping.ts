@@ -66,7 +66,12 @@ function mapOne(f: AreaFeature, mapping: FieldMapping, options: MappingOptions):
 /** Rejects every row of a parcel ID used more than once: which one is right cannot be known. */
 function duplicateReasons(mapped: { f: AreaFeature; m: MappedAttributes }[]): Map<AreaFeature, string> {
   const rowsById = new Map<string, number[]>();
-  for (const { f, m } of mapped) if (m.parcelId) rowsById.set(m.parcelId, [...(rowsById.get(m.parcelId) ?? []), f.sourceRow]);
+  for (const { f, m } of mapped) {
+    if (!m.parcelId) continue;
+    const rows = rowsById.get(m.parcelId);
+    if (rows) rows.push(f.sourceRow);
+    else rowsById.set(m.parcelId, [f.sourceRow]);
+  }
   const reasons = new Map<AreaFeature, string>();
   for (const { f, m } of mapped) {
     const rows = m.parcelId ? rowsById.get(m.parcelId)! : [];

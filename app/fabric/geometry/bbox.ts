@@ -8,13 +8,18 @@ export function positionsOf(geometry: AreaGeometry): Position[] {
 
 /** Bounding box [minX, minY, maxX, maxY] of geometries in their own units; null when there are none. */
 export function bboxOf(geometries: AreaGeometry[]): [number, number, number, number] | null {
-  let box: [number, number, number, number] | null = null;
+  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
   for (const g of geometries) {
-    for (const p of positionsOf(g)) {
-      const [x, y] = p as [number, number];
-      if (!box) box = [x, y, x, y];
-      else box = [Math.min(box[0], x), Math.min(box[1], y), Math.max(box[2], x), Math.max(box[3], y)];
+    const rings = g.type === "Polygon" ? g.coordinates : g.coordinates.flat();
+    for (const ring of rings) {
+      for (const p of ring) {
+        const x = p[0]!, y = p[1]!;
+        if (x < minX) minX = x;
+        if (x > maxX) maxX = x;
+        if (y < minY) minY = y;
+        if (y > maxY) maxY = y;
+      }
     }
   }
-  return box;
+  return minX === Infinity ? null : [minX, minY, maxX, maxY];
 }

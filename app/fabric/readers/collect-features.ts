@@ -40,10 +40,13 @@ function isoDay(d: Date): string {
 
 function to2d(rings: Position[][]): { rings: Position[][]; hadZ: boolean } {
   let hadZ = false;
-  const flat = rings.map((r) => (Array.isArray(r) ? r : []).map((p) => {
-    if (Array.isArray(p) && p.length > 2) hadZ = true;
-    return Array.isArray(p) ? [p[0]!, p[1]!] : p;
-  }));
+  const flat = rings.map((r) => {
+    if (!Array.isArray(r)) return [];
+    // Most files are 2D already: keep those rings as they are rather than copy every vertex.
+    if (r.every((p) => !Array.isArray(p) || p.length <= 2)) return r;
+    hadZ = true;
+    return r.map((p) => (Array.isArray(p) ? [p[0]!, p[1]!] : p));
+  });
   return { rings: flat, hadZ };
 }
 

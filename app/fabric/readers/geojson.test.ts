@@ -66,3 +66,11 @@ test("bad JSON and non-collections raise typed errors", () => {
   }
   expect(isFabricInputError(caught, "unsupported_format")).toBe(true);
 });
+
+test("heights are dropped from 3D rings with one warning; 2D rows keep their vertices", () => {
+  const flat = [[0, 0], [10, 0], [10, 10], [0, 10], [0, 0]];
+  const tall = flat.map(([x, y]) => [x! + 20, y!, 101.5]);
+  const r = readGeoJson(utf8({ type: "FeatureCollection", features: [flat, tall].map((ring, i) => ({ type: "Feature", properties: { PIN: `Q-${i}` }, geometry: { type: "Polygon", coordinates: [ring] } })) }));
+  expect(r.features.map((f) => f.geometry.coordinates[0])).toEqual([flat, tall.map(([x, y]) => [x, y])]);
+  expect(r.warnings).toEqual(["Heights (Z values) on 1 rows were dropped; areas are planar."]);
+});
