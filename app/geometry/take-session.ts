@@ -1,0 +1,135 @@
+import type { AlignmentElement } from "./alignment-types";
+import { buildCorridor, buildWidened, resolvePieceOptions } from "./corridor-build";
+import type { Corridor, CorridorPiece } from "./corridor-types";
+import { assembleTakeResult, type BuildingFinding } from "./take-assemble";
+import { measureBuilding, findOwnerParcel, type BuildingMeasure } from "./take-buildings";
+import { createKeyInterner, indexBounds, type BoundsIndex } from "./take-index";
+import { measureParcel, type ParcelMeasure } from "./take-parcel";
+import { requireTakeRules } from "./take-rules-check";
+import { prepareShape, type PreparedShape } from "./take-shapes";
+import type { CorridorInput, TakeBuildingInput, TakeParcelInput, TakeResult, TakeRules } from "./take-types";
+import { BUILDING_HIT_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
+
+/** Counts from the last `compute`, for benchmarks and tests. */
+export interface TakeSessionStats {
+  candidates: number;
+  measured: number;
+  reused: number;
+}
+
+/** Parcels and buildings held in memory with their indexes, for repeated take computations. */
+export interface TakeSession {
+  /** Takes for one alignment and corridor; parcels whose nearby corridor pieces did not change are reused. */
+  compute(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules): TakeResult;
+  readonly stats: TakeSessionStats;
+}
+
+interface Cached<T> {
+  key: string;
+  value: T;
+}
+
+/**
+ * A take session: prepares every parcel and building once (oriented rings, areas, a flatbush
+ * index) and caches each parcel's measured geometry under a key made of the exact geometry of the
+ * corridor pieces whose bounds meet it (and their stations relative to the first). After a PI
+ * moves, only parcels near pieces that changed are measured again; results are identical to a
+ * fresh computation because a reused value was computed from the same pieces.
+ */
+export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBuildingInput[] = []): TakeSession {
+  const parcelShapes = parcels.map((p, i) => prepareShape(p.polygons, `parcels.${i}.polygons`));
+  const buildingShapes = buildings.map((b, i) => prepareShape(b.polygons, `buildings.${i}.polygons`));
+  const parcelIndex = indexBounds(parcelShapes.map((s) => s.bounds));
+  const buildingIndex = indexBounds(buildingShapes.map((s) => s.bounds));
+  const parcelById = new Map(parcels.map((p, i) => [p.parcelId, i]));
+  const parcelCache: (Cached<ParcelMeasure> | undefined)[] = [];
+  const buildingCache: (Cached<BuildingMeasure> | undefined)[] = [];
+  const owners = new Map<number, number>();
+  const interner = createKeyInterner();
+  const stats: TakeSessionStats = { candidates: 0, measured: 0, reused: 0 };
+
+  const keyOf = (groups: CorridorPiece[][]): { key: string; base: number } => {
+    const all = groups.flat();
+    const base = all.reduce((m, p) => Math.min(m, p.stationFrom), Infinity);
+    const parts = groups.map((g) => g.map((p) => `${interner.id(p.key)}@${p.stationFrom - base}`).join(","));
+    return { key: `${interner.generation()}|${parts.join("|")}`, base };
+  };
+
+  const ownerOf = (j: number): { index: number; parcelId: string | null } => {
+    const given = buildings[j]!.parcelId;
+    if (given) return { index: parcelById.get(given) ?? -1, parcelId: given };
+    let index = owners.get(j);
+    if (index === undefined) {
+      const near = parcelIndex.search(buildingShapes[j]!.bounds);
+      const k = findOwnerParcel(buildingShapes[j]!, near.map((i) => parcelShapes[i]!));
+      index = k < 0 ? -1 : near[k]!;
+      owners.set(j, index);
+    }
+    return { index, parcelId: index >= 0 ? parcels[index]!.parcelId : null };
+  };
+
+  function compute(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules): TakeResult {
+    requireTakeRules(rules);
+    const row = buildCorridor(elements, corridor);
+    const wide = row.easement;
+    const rowIdx = indexPieces(row);
+    const wideIdx = wide ? indexPieces(wide) : null;
+    Object.assign(stats, { candidates: 0, measured: 0, reused: 0 });
+    const measures = new Map<number, { measure: ParcelMeasure; base: number }>();
+    for (const i of candidatesOf(wide ?? row, parcelIndex)) {
+      const shape = parcelShapes[i]!;
+      const rowHits = hitsOf(row, rowIdx, shape);
+      const wideHits = wide && wideIdx ? hitsOf(wide, wideIdx, shape) : [];
+      if (rowHits.length + wideHits.length === 0) continue;
+      stats.candidates++;
+      const { key, base } = keyOf([rowHits, wideHits]);
+      let cached = parcelCache[i];
+      if (cached?.key === key) stats.reused++;
+      else {
+        cached = { key, value: measureParcel(shape, rowHits, wide ? wideHits : null, row.pieces, base) };
+        parcelCache[i] = cached;
+        stats.measured++;
+      }
+      measures.set(i, { measure: cached.value, base });
+    }
+    const findings = buildings.length > 0 ? findBuildings(elements, corridor, rules, row, rowIdx) : [];
+    return assembleTakeResult({ row, parcels, parcelShapes, measures, findings, rules, buildingValue: (j) => buildings[j]!.value ?? rules.buildingValue });
+  }
+
+  function findBuildings(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules, row: Corridor, rowIdx: BoundsIndex): BuildingFinding[] {
+    const d = rules.proximityDistance;
+    const prox = d > 0 ? buildWidened(elements, corridor, d, resolvePieceOptions(corridor), "rules.proximityDistance") : row;
+    const proxIdx = d > 0 ? indexPieces(prox) : rowIdx;
+    const found: BuildingFinding[] = [];
+    for (const j of candidatesOf(prox, buildingIndex)) {
+      const shape = buildingShapes[j]!;
+      const rowHits = hitsOf(row, rowIdx, shape);
+      const proxHits = hitsOf(prox, proxIdx, shape);
+      const { key, base } = keyOf([rowHits, proxHits]);
+      let cached = buildingCache[j];
+      if (cached?.key !== key) buildingCache[j] = cached = { key, value: measureBuilding(shape, rowHits, proxHits, base) };
+      const m = cached.value;
+      const hit = m.hitArea > BUILDING_HIT_AREA;
+      if (!hit && !(m.nearArea > TAKE_MIN_AREA)) continue;
+      found.push({ building: j, buildingId: buildings[j]!.buildingId, hit, owner: ownerOf(j), span: m.span ? [m.span[0] + base, m.span[1] + base] : null });
+    }
+    return found;
+  }
+
+  return { compute, stats };
+}
+
+function indexPieces(c: Corridor): BoundsIndex {
+  return indexBounds(c.pieces.map((p) => p.bounds));
+}
+
+function hitsOf(c: Corridor, idx: BoundsIndex, shape: PreparedShape): CorridorPiece[] {
+  return idx.search(shape.bounds).sort((a, b) => a - b).map((k) => c.pieces[k]!);
+}
+
+/** Items of `index` whose bounds meet any piece's bounds, ascending. */
+function candidatesOf(c: Corridor, index: BoundsIndex): number[] {
+  const seen = new Set<number>();
+  for (const p of c.pieces) for (const i of index.search(p.bounds)) seen.add(i);
+  return [...seen].sort((a, b) => a - b);
+}
