@@ -1,19 +1,13 @@
 import { useCallback, useMemo, useRef, useState } from "react";
-import Map, { Layer, NavigationControl, ScaleControl, Source, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
+import Map, { NavigationControl, ScaleControl, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
+import { FabricLayers } from "./fabric-layers";
+import { browserMapLib, markMapReady } from "./map-lib";
 import { MapLegend } from "./map-legend";
 import { ParcelCard, type ParcelSummary } from "./parcel-card";
-import { parcelFillColour, type ParcelColouring } from "./parcel-styles";
+import type { ParcelColouring } from "./parcel-styles";
 import { MapToolbar } from "./map-toolbar";
 
 export type MapLayerInfo = { id: number; kind: "parcels" | "buildings"; name: string; bbox: [number, number, number, number] | null };
-
-let mapLib: Promise<typeof import("maplibre-gl")> | undefined;
-/** MapLibre is loaded in the browser only, once; the server renders the map's frame without it. */
-function browserMapLib() {
-  if (typeof window === "undefined") return undefined;
-  mapLib ??= import("./maplibre-with-worker").then((m) => m.maplibregl);
-  return mapLib;
-}
 
 function unionBbox(layers: MapLayerInfo[]): [number, number, number, number] | undefined {
   const boxes = layers.map((l) => l.bbox).filter((b): b is [number, number, number, number] => b !== null);
@@ -29,7 +23,6 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
   const [selected, setSelected] = useState<ParcelSummary | null>(null);
   const hovered = useRef<{ source: string; id: number } | null>(null);
   const bounds = useMemo(() => unionBbox(layers), [layers]);
-  const origin = typeof window === "undefined" ? "" : window.location.origin;
   const parcelLayers = layers.filter((l) => l.kind === "parcels");
   const interactive = parcelLayers.filter((l) => !hidden.has(l.id)).map((l) => `parcels-fill-${l.id}`);
 
@@ -76,27 +69,12 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
           onMouseLeave={() => setHover(null)}
           onClick={onClick}
           cursor={hovered.current ? "pointer" : "grab"}
-          onLoad={() => { (window as unknown as { __takelineMapReady?: boolean }).__takelineMapReady = true; }}
+          onLoad={markMapReady}
           attributionControl={false}
         >
           <NavigationControl position="top-left" showCompass={false} />
           <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />
-          {/* Parcels first so building footprints draw on top of them. */}
-          {[...layers].sort((a, b) => (a.kind === b.kind ? 0 : a.kind === "parcels" ? -1 : 1)).map((l) => (
-            <Source key={l.id} id={`layer-${l.id}`} type="vector" tiles={[`${origin}/tiles/layers/${l.id}/{z}/{x}/{y}.pbf`]} minzoom={0} maxzoom={18}>
-              {l.kind === "parcels" ? (
-                <>
-                  <Layer id={`parcels-fill-${l.id}`} source={`layer-${l.id}`} type="fill" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
-                    paint={{ "fill-color": parcelFillColour(colouring), "fill-opacity": ["case", ["boolean", ["feature-state", "hover"], false], 0.9, 0.6] }} />
-                  <Layer id={`parcels-line-${l.id}`} source={`layer-${l.id}`} type="line" source-layer="parcels" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
-                    paint={{ "line-color": "#5b5446", "line-width": ["interpolate", ["linear"], ["zoom"], 12, 0.3, 17, 1.2] }} />
-                </>
-              ) : (
-                <Layer id={`buildings-${l.id}`} source={`layer-${l.id}`} type="fill" source-layer="buildings" layout={{ visibility: hidden.has(l.id) ? "none" : "visible" }}
-                  paint={{ "fill-color": "#6f675a", "fill-opacity": 0.85 }} />
-              )}
-            </Source>
-          ))}
+          <FabricLayers layers={layers} hidden={hidden} colouring={colouring} />
         </Map>
         {parcelLayers.length > 0 && <MapLegend colouring={colouring} valueUnit={areaUnit} />}
         {selected && <ParcelCard parcel={selected} areaUnit={areaUnit} onClose={() => setSelected(null)} />}
