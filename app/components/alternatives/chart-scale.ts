@@ -1,0 +1,43 @@
+/** A linear map from a data interval to a pixel interval (a zero-width domain maps to the middle). */
+export function linearScale(domain: [number, number], range: [number, number]): (v: number) => number {
+  const [d0, d1] = domain;
+  const [r0, r1] = range;
+  if (d1 === d0) return () => (r0 + r1) / 2;
+  return (v) => r0 + ((v - d0) / (d1 - d0)) * (r1 - r0);
+}
+
+/**
+ * Round tick values covering [min, max]: the step is 1, 2 or 5 × 10ⁿ, chosen so about `count`
+ * ticks fall in the range (P. Heckbert, "Nice numbers for graph labels", Graphics Gems, 1990).
+ */
+export function niceTicks(min: number, max: number, count = 5): number[] {
+  if (!Number.isFinite(min) || !Number.isFinite(max)) return [];
+  if (max < min) [min, max] = [max, min];
+  if (max === min) return [min];
+  const rough = (max - min) / Math.max(1, count - 1);
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const fraction = rough / power;
+  const step = (fraction < 1.5 ? 1 : fraction < 3 ? 2 : fraction < 7 ? 5 : 10) * power;
+  const first = Math.ceil(min / step - 1e-9) * step;
+  const ticks: number[] = [];
+  for (let v = first; v <= max + step * 1e-9; v += step) ticks.push(Number(v.toPrecision(12)));
+  return ticks;
+}
+
+/** The range a chart's value axis spans: from zero when all values are positive, padded by 5 %. */
+export function valueExtent(values: number[], fromZero = true): [number, number] {
+  const finite = values.filter(Number.isFinite);
+  if (finite.length === 0) return [0, 1];
+  const lo = Math.min(...finite, ...(fromZero ? [0] : []));
+  const hi = Math.max(...finite);
+  if (hi === lo) return [lo, lo === 0 ? 1 : lo * 1.1];
+  return [lo, hi + (hi - lo) * 0.05];
+}
+
+/** Short tick labels: 12 500 → "12.5k", 3 400 000 → "3.4M". */
+export function shortNumber(v: number): string {
+  const a = Math.abs(v);
+  if (a >= 1e6) return `${Number((v / 1e6).toPrecision(3))}M`;
+  if (a >= 1e4) return `${Number((v / 1e3).toPrecision(3))}k`;
+  return String(Number(v.toPrecision(4)));
+}
