@@ -22,7 +22,7 @@ export type AlternativeInputs = Pick<Alternative, "name" | "description" | "desi
 /** Corridor colours, one per alternative in creation order: distinct from the parcel and basemap palette. */
 const COLOURS = ["#d9480f", "#0b7285", "#7048e8", "#2b8a3e", "#c2255c", "#5c940d", "#1864ab", "#e67700"];
 
-const asAlternative = (row: Row): Alternative => row as Alternative;
+const asAlternative = (row: Row): Alternative => row as unknown as Alternative;
 
 /** Creates version 1 of an alternative and records it, in one transaction. */
 export function createAlternative(projectId: number, inputs: AlternativeInputs, actorId: number | null, tx: Db = db()): Alternative {
@@ -30,7 +30,7 @@ export function createAlternative(projectId: number, inputs: AlternativeInputs, 
     const count = t.select({ n: sql<number>`count(*)` }).from(alternatives).where(eq(alternatives.projectId, projectId)).get()?.n ?? 0;
     const row = t
       .insert(alternatives)
-      .values({ ...toColumns(inputs), projectId, colour: COLOURS[count % COLOURS.length]!, createdBy: actorId, updatedBy: actorId, updatedAt: new Date() })
+      .values({ ...toColumns(inputs), name: inputs.name, designSpeed: inputs.designSpeed, speedUnit: inputs.speedUnit, emaxPercent: inputs.emaxPercent, alignment: json(inputs.alignment), corridor: json(inputs.corridor), rules: json(inputs.rules), acceptedChecks: inputs.acceptedChecks, projectId, colour: COLOURS[count % COLOURS.length]!, createdBy: actorId, updatedBy: actorId, updatedAt: new Date() })
       .returning()
       .get();
     saveVersion(row, actorId, t);
@@ -66,22 +66,22 @@ export function listAlternatives(projectId: number, tx: Db = db()): Alternative[
 
 /** The alternative if the user may see its project (member, or admin), scoped in the query. */
 export function findAlternativeForUser(id: number, user: { id: number; role: Role }, tx: Db = db()): Alternative | undefined {
-  if (user.role === "admin") return tx.select().from(alternatives).where(eq(alternatives.id, id)).get() as Alternative | undefined;
+  if (user.role === "admin") return tx.select().from(alternatives).where(eq(alternatives.id, id)).get() as unknown as Alternative | undefined;
   return tx
     .select({ alternative: alternatives })
     .from(alternatives)
     .innerJoin(projectMembers, and(eq(projectMembers.projectId, alternatives.projectId), eq(projectMembers.userId, user.id)))
     .where(eq(alternatives.id, id))
-    .get()?.alternative as Alternative | undefined;
+    .get()?.alternative as unknown as Alternative | undefined;
 }
 
 export function findAlternativeByName(projectId: number, name: string, tx: Db = db()): Alternative | undefined {
-  return tx.select().from(alternatives).where(and(eq(alternatives.projectId, projectId), eq(alternatives.name, name))).get() as Alternative | undefined;
+  return tx.select().from(alternatives).where(and(eq(alternatives.projectId, projectId), eq(alternatives.name, name))).get() as unknown as Alternative | undefined;
 }
 
 /** The inputs an alternative had at a saved version. */
 export function findAlternativeVersion(id: number, version: number, tx: Db = db()): AlternativeInputs | undefined {
-  return tx.select().from(alternativeVersions).where(and(eq(alternativeVersions.alternativeId, id), eq(alternativeVersions.version, version))).get()?.inputs as AlternativeInputs | undefined;
+  return tx.select().from(alternativeVersions).where(and(eq(alternativeVersions.alternativeId, id), eq(alternativeVersions.version, version))).get()?.inputs as unknown as AlternativeInputs | undefined;
 }
 
 export function inputsOf(a: Alternative): AlternativeInputs {
@@ -93,13 +93,15 @@ function saveVersion(row: Row, actorId: number | null, t: Db): void {
   t.insert(alternativeVersions).values({ alternativeId: row.id, version: row.version, inputs: inputsOf(asAlternative(row)) as unknown as Record<string, unknown>, savedBy: actorId }).run();
 }
 
+const json = (v: object): Record<string, unknown> => v as Record<string, unknown>;
+
 function toColumns(inputs: Partial<AlternativeInputs>) {
   const { alignment, corridor, rules, ...rest } = inputs;
   return {
     ...rest,
-    ...(alignment ? { alignment: alignment as unknown as Record<string, unknown> } : {}),
-    ...(corridor ? { corridor: corridor as unknown as Record<string, unknown> } : {}),
-    ...(rules ? { rules: rules as Record<string, unknown> } : {}),
+    ...(alignment ? { alignment: json(alignment) } : {}),
+    ...(corridor ? { corridor: json(corridor) } : {}),
+    ...(rules ? { rules: json(rules) } : {}),
   };
 }
 

@@ -1,6 +1,7 @@
 import { hashPassword } from "~/utils/password.server";
 import { db } from "~/utils/db.server";
 import { recordAuditEvent } from "./audit.server";
+import { seedDemoAlternatives } from "./demo-alternatives.server";
 import { seedDemoFabric } from "./demo-fabric.server";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from "./demo-accounts";
 import { createProject, findProjectByName, upsertProjectMember } from "./projects.server";
@@ -17,6 +18,7 @@ export const DEMO_PROJECT = {
 export async function seedDemo(): Promise<{ users: number; projectId: number; features: number }> {
   const seeded = await seedDemoAccounts();
   const features = await seedDemoFabric(DEMO_PROJECT.name, seeded.plannerId);
+  seedDemoAlternatives(DEMO_PROJECT.name, seeded.plannerId);
   return { users: seeded.users, projectId: seeded.projectId, features };
 }
 

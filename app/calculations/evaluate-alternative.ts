@@ -1,0 +1,35 @@
+import type { AlignmentElement, AlignmentInput } from "~/geometry/alignment-types";
+import { computeAlignmentGeometry, type AlignmentGeometry } from "~/geometry/compute-alignment-geometry";
+import type { DesignCheckInput } from "~/geometry/design-check-types";
+import type { CorridorInput, TakeResult, TakeRules } from "~/geometry/take-types";
+import { summarizeAlternative, type AlternativeSummary } from "./alternative-summary";
+import { applyCheckAcceptances, type CheckAcceptance, type ReviewedCheck } from "./check-acceptances";
+
+/** What the overlay needs from a take session (the engine's incremental one, or a one-shot). */
+export interface TakeComputer {
+  compute(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules): TakeResult;
+}
+
+export interface EvaluationInputs {
+  alignment: AlignmentInput;
+  corridor: CorridorInput;
+  rules: TakeRules;
+  design: DesignCheckInput;
+  acceptedChecks: CheckAcceptance[];
+}
+
+export interface Evaluation {
+  geometry: AlignmentGeometry;
+  checks: ReviewedCheck[];
+  staleAcceptances: CheckAcceptance[];
+  takes: TakeResult;
+  summary: AlternativeSummary;
+}
+
+/** Alignment → checks → corridor → takes → summary, for one set of inputs. Throws GeometryInputError. */
+export function evaluateAlternative(inputs: EvaluationInputs, takes: TakeComputer): Evaluation {
+  const geometry = computeAlignmentGeometry(inputs.alignment, { design: inputs.design });
+  const reviewed = applyCheckAcceptances(geometry.checks, inputs.acceptedChecks);
+  const result = takes.compute(geometry.elements, inputs.corridor, inputs.rules);
+  return { geometry, checks: reviewed.checks, staleAcceptances: reviewed.stale, takes: result, summary: summarizeAlternative(geometry, reviewed.checks, result) };
+}
