@@ -4,7 +4,7 @@ import type { PolygonCoords } from "../geometry/take-types";
 import { columnLabel, columnName, IMPACT_COLUMNS, KIND_DECIMALS, type ImpactColumn } from "./impact-columns";
 import { formatCell } from "./impact-csv";
 import type { GeoExportOptions, ImpactExportSheet } from "./impact-types";
-import { utf8Within, writeDbf, type DbfField, type DbfValue } from "./shapefile/dbf-write";
+import { writeDbf, type DbfField, type DbfValue } from "./shapefile/dbf-write";
 import { prjWktFor } from "./shapefile/prj-wkt";
 import { writeShpShx } from "./shapefile/shp-polygons";
 import { writeZip } from "./shapefile/zip-write.server";
@@ -27,21 +27,34 @@ interface Column {
 }
 
 /** A DBF column per impact column: text (and lists, joined with ";") as C, numbers as N with fixed decimals. */
-function columnsFor(sheets: readonly ImpactExportSheet[]): Column[] {
-  const units = sheets[0]!.units;
+function columnsFor(units: ImpactExportSheet["units"]): Column[] {
   const make = (c: ImpactColumn): Column => {
     const isText = c.kind === "text" || c.kind === "list" || c.kind === "areaList";
     const value = (s: ImpactExportSheet, r: ImpactExportSheet["rows"][number]): DbfValue => {
       const v = c.value(r, s.alternativeName);
       return isText ? (v === null ? null : formatCell(v, c.kind)) : (v as number);
     };
-    const texts = sheets.flatMap((s) => s.rows.map((r) => value(s, r))).map((v) => (v === null ? "" : isText ? String(v) : (v as number).toFixed(KIND_DECIMALS[c.kind])));
-    const widest = Math.max(1, ...texts.map((t) => encoder.encode(t).length));
-    const field: DbfField = { name: c.dbf, type: isText ? "C" : "N", length: isText ? Math.min(widest, TEXT_MAX_BYTES) : Math.max(widest, 2), decimals: isText ? 0 : KIND_DECIMALS[c.kind] };
+    const field: DbfField = { name: c.dbf, type: isText ? "C" : "N", length: 1, decimals: isText ? 0 : KIND_DECIMALS[c.kind] };
     return { field, value, describe: `${c.dbf.padEnd(10)}  ${columnName(c, units).padEnd(28)}  ${columnLabel(c, units)}` };
   };
-  const unitsColumn: Column = { field: { name: "UNITS", type: "C", length: 4, decimals: 0 }, value: (s) => s.units, describe: `${"UNITS".padEnd(10)}  ${"units".padEnd(28)}  Length unit (areas are its square)` };
+  const unitsColumn: Column = { field: { name: "UNITS", type: "C", length: 1, decimals: 0 }, value: (s) => s.units, describe: `${"UNITS".padEnd(10)}  ${"units".padEnd(28)}  Length unit (areas are its square)` };
   return [...IMPACT_COLUMNS.map(make), unitsColumn];
+}
+
+/** Sizes each field to its widest value (text in UTF-8 bytes, at most 254; numbers with their decimals). */
+function fitWidths(columns: Column[], records: DbfValue[][], warnings: string[]): DbfField[] {
+  const widths: number[] = columns.map((c) => (c.field.type === "N" ? 2 : 1));
+  records.forEach((rec, i) =>
+    rec.forEach((v, j) => {
+      if (v === null) return;
+      const f = columns[j]!.field;
+      // A UTF-16 unit is at most 3 UTF-8 bytes, so short strings need no encoding to measure.
+      const len = f.type === "N" ? (v as number).toFixed(f.decimals).length : (v as string).length * 3 <= widths[j]! ? 0 : encoder.encode(v as string).length;
+      if (len > TEXT_MAX_BYTES && f.type === "C") warnings.push(`Row ${i + 1}: ${f.name} was cut to ${TEXT_MAX_BYTES} bytes.`);
+      widths[j] = Math.max(widths[j]!, f.type === "C" ? Math.min(len, TEXT_MAX_BYTES) : len);
+    }),
+  );
+  return columns.map((c, j) => ({ ...c.field, length: widths[j]! }));
 }
 
 function workingGeometry(polygons: PolygonCoords[] | null | undefined, options: GeoExportOptions): PolygonCoords[] | null {
@@ -61,14 +74,10 @@ export function writeImpactShapefileZip(sheets: readonly ImpactExportSheet[], op
   if (sheets.length === 0) throw new Error("writeImpactShapefileZip: no alternatives to export");
   const other = sheets.find((s) => s.units !== sheets[0]!.units);
   if (other) throw new Error(`writeImpactShapefileZip: all alternatives must share one unit ("${other.alternativeName}" is in ${other.units})`);
-  const columns = columnsFor(sheets);
+  const columns = columnsFor(sheets[0]!.units);
   const warnings: string[] = [];
   const records = sheets.flatMap((s) => s.rows.map((r) => columns.map((c) => c.value(s, r))));
-  records.forEach((rec, i) =>
-    rec.forEach((v, j) => {
-      if (typeof v === "string" && utf8Within(v, TEXT_MAX_BYTES).length < encoder.encode(v).length) warnings.push(`Row ${i + 1}: ${columns[j]!.field.name} was cut to ${TEXT_MAX_BYTES} bytes.`);
-    }),
-  );
+  const fields = fitWidths(columns, records, warnings);
   const { shp, shx } = writeShpShx(sheets.flatMap((s) => s.rows.map((r) => workingGeometry(r.geometry, options))));
   const layer = options.layerName ?? "takes";
   const fieldsText = ["Shapefile field  CSV/GeoJSON name              Meaning", ...columns.map((c) => c.describe)].join("\r\n") + "\r\n";
@@ -76,7 +85,7 @@ export function writeImpactShapefileZip(sheets: readonly ImpactExportSheet[], op
     [
       { name: `${layer}.shp`, data: shp },
       { name: `${layer}.shx`, data: shx },
-      { name: `${layer}.dbf`, data: writeDbf(columns.map((c) => c.field), records, options.modified) },
+      { name: `${layer}.dbf`, data: writeDbf(fields, records, options.modified) },
       { name: `${layer}.prj`, data: encoder.encode(prjWktFor(options.workingEpsg)) },
       { name: `${layer}.cpg`, data: encoder.encode("UTF-8") },
       { name: `${layer}-fields.txt`, data: encoder.encode(fieldsText) },

@@ -100,14 +100,24 @@ function header(lengthBytes: number, box: Box | null): Uint8Array {
  * specification requires. Lengths and offsets are in 16-bit words; record numbers start at 1.
  */
 export function writeShpShx(geometries: readonly (PolygonCoords[] | null | undefined)[]): { shp: Uint8Array; shx: Uint8Array } {
-  const contents = geometries.map((g) => recordContent(g?.length ? shapefileRings(g) : []));
-  const all = geometries.flatMap((g) => (g?.length ? g.flat() : []));
-  const box = all.length ? boxOf(all) : null;
+  const box: Box = { xmin: Infinity, ymin: Infinity, xmax: -Infinity, ymax: -Infinity };
+  const contents = geometries.map((g) => {
+    const rings = g?.length ? shapefileRings(g) : [];
+    if (rings.length) {
+      const b = boxOf(rings);
+      box.xmin = Math.min(box.xmin, b.xmin);
+      box.ymin = Math.min(box.ymin, b.ymin);
+      box.xmax = Math.max(box.xmax, b.xmax);
+      box.ymax = Math.max(box.ymax, b.ymax);
+    }
+    return recordContent(rings);
+  });
   const shpLength = 100 + contents.reduce((n, c) => n + 8 + c.length, 0);
   const shp = new Uint8Array(shpLength);
   const shx = new Uint8Array(100 + 8 * contents.length);
-  shp.set(header(shpLength, box), 0);
-  shx.set(header(shx.length, box), 0);
+  const fileBox = box.xmin <= box.xmax ? box : null;
+  shp.set(header(shpLength, fileBox), 0);
+  shx.set(header(shx.length, fileBox), 0);
   const sv = new DataView(shp.buffer);
   const xv = new DataView(shx.buffer);
   let at = 100;
