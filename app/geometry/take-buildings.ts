@@ -1,10 +1,8 @@
 import * as polyclip from "polyclip-ts";
 import { boundsOverlap, flatRingArea } from "./corridor-pieces";
 import type { CorridorPiece } from "./corridor-types";
-import { clipRingConvex } from "./take-clip";
-import { TAKE_MIN_AREA } from "./corridor-tolerances";
+import { clippedArea, clipRingConvex } from "./take-clip";
 import { pieceAreas } from "./take-parcel";
-import { pieceStationSpan } from "./take-span";
 import type { PreparedShape } from "./take-shapes";
 
 /** Footprint overlaps with the right-of-way and with the proximity band (square units). */
@@ -18,12 +16,7 @@ export interface BuildingMeasure {
 /** Exact overlaps of a footprint with the right-of-way pieces and the widened (proximity) pieces near it. */
 export function measureBuilding(shape: PreparedShape, row: CorridorPiece[], near: CorridorPiece[], base: number): BuildingMeasure {
   const hit = pieceAreas(shape, row);
-  let span: [number, number] | null = null;
-  row.forEach((p, k) => {
-    if (!(hit.perPiece[k]! > TAKE_MIN_AREA)) return;
-    const s = pieceStationSpan(shape.polygons, p);
-    if (s) span = span ? [Math.min(span[0], s[0] - base), Math.max(span[1], s[1] - base)] : [s[0] - base, s[1] - base];
-  });
+  const span: [number, number] | null = hit.span ? [hit.span[0] - base, hit.span[1] - base] : null;
   return { hitArea: hit.total, nearArea: pieceAreas(shape, near).total, span };
 }
 
@@ -67,7 +60,7 @@ function convexClip(shape: PreparedShape): { ox: number; oy: number; local: numb
 
 function convexOverlap(parcel: PreparedShape, clip: { ox: number; oy: number; local: number[] }): number {
   let a = 0;
-  for (const p of parcel.polygons) for (const ring of p.rings) a += flatRingArea(clipRingConvex(ring, clip.ox, clip.oy, clip.local));
+  for (const p of parcel.polygons) for (const ring of p.rings) a += clippedArea(clipRingConvex(ring, clip.ox, clip.oy, clip.local));
   return a;
 }
 

@@ -7,11 +7,10 @@
  */
 
 /**
- * Signed area of (flat ring, coordinates relative to the disc centre after adding (dx, dy)) ∩
- * disc of radius `r`. Counter-clockwise rings are positive.
+ * Signed area of (flat ring `ring[0 .. n)`, coordinates relative to the disc centre after adding
+ * (dx, dy)) ∩ disc of radius `r`. Counter-clockwise rings are positive.
  */
-export function ringDiscArea(ring: ArrayLike<number>, r: number, dx = 0, dy = 0): number {
-  const n = ring.length;
+export function ringDiscArea(ring: ArrayLike<number>, n: number, r: number, dx = 0, dy = 0): number {
   if (n < 6) return 0;
   const r2 = r * r;
   let sum = 0;

@@ -4,7 +4,6 @@ import type { CorridorPiece } from "./corridor-types";
 import { polygonPieceArea } from "./take-piece-area";
 import { remainderPieceAreas } from "./take-remainder";
 import type { PreparedShape } from "./take-shapes";
-import { pieceStationSpan } from "./take-span";
 
 /** What the corridor does to one parcel's geometry (independent of rules and costs). */
 export interface ParcelMeasure {
@@ -12,7 +11,7 @@ export interface ParcelMeasure {
   /** Easement strips ∩ parcel, outside the right-of-way. */
   easementArea: number;
   remainderArea: number;
-  /** Remainder pieces, largest first, slivers dropped. */
+  /** Remainder pieces, largest first, slivers dropped (with no take: the parcel's own polygons). */
   pieceAreas: number[];
   /** Centreline stations the take spans (the easement's when there is no take), minus `base`. */
   span: [number, number] | null;
@@ -21,7 +20,7 @@ export interface ParcelMeasure {
 /**
  * Exact take and easement areas of a parcel, its remainder pieces and station span. `row` and
  * `wide` are the right-of-way and widened (easement) pieces whose bounds meet the parcel's; `all`
- * is the whole right-of-way (for the local polygon when the remainder must be split).
+ * is the whole right-of-way (for the corridor boundary when the remainder splits).
  */
 export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: CorridorPiece[] | null, all: CorridorPiece[], base: number): ParcelMeasure {
   const rowAreas = pieceAreas(shape, row);
@@ -38,38 +37,31 @@ export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: 
   } else {
     for (const polygon of shape.polygons) if (polygon.area >= SLIVER_AREA) pieces.push(polygon.area);
   }
-  const spanFrom = takeArea > TAKE_MIN_AREA ? { pieces: row, areas: rowAreas.perPiece } : wideAreas && easementArea > TAKE_MIN_AREA ? { pieces: wide!, areas: wideAreas.perPiece } : null;
-  return { takeArea, easementArea, remainderArea: Math.max(0, shape.area - takeArea), pieceAreas: pieces, span: spanFrom ? spanOf(shape, spanFrom.pieces, spanFrom.areas, base) : null };
+  const span = takeArea > TAKE_MIN_AREA ? rowAreas.span : wideAreas && easementArea > TAKE_MIN_AREA ? wideAreas.span : null;
+  return { takeArea, easementArea, remainderArea: Math.max(0, shape.area - takeArea), pieceAreas: pieces, span: span ? [span[0] - base, span[1] - base] : null };
 }
 
-/** Exact area of (shape ∩ pieces), per piece and per polygon of the shape. */
-export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPiece: number[]; perPolygon: number[] } {
-  const perPiece = pieces.map(() => 0);
+/** Exact area of (shape ∩ pieces), in total and per polygon of the shape, and the stations it spans. */
+export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPolygon: number[]; span: [number, number] | null } {
   const perPolygon = shape.polygons.map(() => 0);
+  const span: [number, number] = [Infinity, -Infinity];
+  const pieceSpan: [number, number] = [Infinity, -Infinity];
   let total = 0;
-  shape.polygons.forEach((polygon, i) => {
-    pieces.forEach((piece, k) => {
+  for (const piece of pieces) {
+    let inPiece = 0;
+    pieceSpan[0] = Infinity;
+    pieceSpan[1] = -Infinity;
+    shape.polygons.forEach((polygon, i) => {
       if (!boundsOverlap(piece.bounds, polygon.bounds)) return;
-      const a = polygonPieceArea(polygon, piece);
-      perPiece[k]! += a;
+      const a = polygonPieceArea(polygon, piece, pieceSpan);
       perPolygon[i]! += a;
-      total += a;
+      inPiece += a;
     });
-  });
-  return { total, perPiece, perPolygon };
-}
-
-function spanOf(shape: PreparedShape, pieces: CorridorPiece[], areas: number[], base: number): [number, number] | null {
-  let lo = Infinity;
-  let hi = -Infinity;
-  pieces.forEach((p, k) => {
-    if (!(areas[k]! > TAKE_MIN_AREA)) return;
-    const s = pieceStationSpan(shape.polygons, p);
-    if (!s) return;
-    lo = Math.min(lo, s[0]);
-    hi = Math.max(hi, s[1]);
-  });
-  return lo <= hi ? [lo - base, hi - base] : null;
+    total += inPiece;
+    // A piece the shape only touches must not stretch the span.
+    if (inPiece > TAKE_MIN_AREA) [span[0], span[1]] = [Math.min(span[0], pieceSpan[0]), Math.max(span[1], pieceSpan[1])];
+  }
+  return { total, perPolygon, span: span[0] <= span[1] ? span : null };
 }
 
 /** Round-off can take an area a hair below 0 or above the parcel's; an area is never outside [0, parcel]. */

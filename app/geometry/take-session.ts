@@ -21,6 +21,8 @@ export interface TakeSessionStats {
 export interface TakeSession {
   /** Takes for one alignment and corridor; parcels whose nearby corridor pieces did not change are reused. */
   compute(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules): TakeResult;
+  /** Forgets every cached parcel and building result (the next `compute` measures everything). */
+  clear(): void;
   readonly stats: TakeSessionStats;
 }
 
@@ -49,10 +51,14 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
   const stats: TakeSessionStats = { candidates: 0, measured: 0, reused: 0 };
 
   const keyOf = (groups: CorridorPiece[][]): { key: string; base: number } => {
-    const all = groups.flat();
-    const base = all.reduce((m, p) => Math.min(m, p.stationFrom), Infinity);
-    const parts = groups.map((g) => g.map((p) => `${interner.id(p.key)}@${p.stationFrom - base}`).join(","));
-    return { key: `${interner.generation()}|${parts.join("|")}`, base };
+    let base = Infinity;
+    for (const g of groups) for (const p of g) if (p.stationFrom < base) base = p.stationFrom;
+    let key = String(interner.generation());
+    for (const g of groups) {
+      key += "|";
+      for (const p of g) key += interner.id(p.key) + "@" + (p.stationFrom - base) + ",";
+    }
+    return { key, base };
   };
 
   const ownerOf = (j: number): { index: number; parcelId: string | null } => {
@@ -116,7 +122,11 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
     return found;
   }
 
-  return { compute, stats };
+  const clear = () => {
+    parcelCache.length = 0;
+    buildingCache.length = 0;
+  };
+  return { compute, clear, stats };
 }
 
 function indexPieces(c: Corridor): BoundsIndex {
