@@ -15,6 +15,8 @@ export interface AlternativeSummary {
   parcelsAffected: number;
   partialTakes: number;
   fullTakes: number;
+  /** Parcels that give only temporary easement, no right-of-way. */
+  easementOnly: number;
   displacements: number;
   proximityImpacts: number;
   takeArea: number;
@@ -42,6 +44,7 @@ export function summarizeAlternative(geometry: AlignmentGeometry, checks: Review
     parcelsAffected: takes.totals.parcelsAffected,
     partialTakes: takes.totals.partialTakes,
     fullTakes: takes.totals.fullTakes,
+    easementOnly: takes.parcels.filter((p) => !(p.takeArea > 0)).length,
     displacements: takes.totals.displacements,
     proximityImpacts: takes.totals.proximityImpacts,
     takeArea: takes.totals.parcelTakeArea,
