@@ -85,3 +85,12 @@ test("the guarded states and roles agree with the matrix", () => {
   expect(availableActions("submitted", "manager")).toEqual(["approve", "return"]);
   expect(availableActions("returned", "planner")).toEqual(["submit"]);
 });
+
+test("the access table names the same roles as the lifecycle", async () => {
+  const { ACCESS } = await import("~/utils/access");
+  expect([...ACCESS.submitAlternatives]).toEqual(rolesFor("submit"));
+  expect([...ACCESS.submitAlternatives]).toEqual(rolesFor("withdraw"));
+  expect([...ACCESS.decideAlternatives]).toEqual(rolesFor("approve"));
+  expect([...ACCESS.decideAlternatives]).toEqual(rolesFor("return"));
+  expect([...ACCESS.editAlternatives]).toEqual(rolesFor("edit"));
+});

@@ -10,6 +10,11 @@ export const ACCESS = {
   editAlternatives: ["planner"],
   takesApi: ["admin", "planner", "manager", "analyst"],
   workList: ["agent"],
+  // Issue 6: the decision pages, and who may act there (the lifecycle's rolesFor() agrees, tested).
+  decisions: ["planner", "manager", "analyst"],
+  submitAlternatives: ["planner"],
+  decideAlternatives: ["manager"],
+  assignParcels: ["manager"],
   manageUsers: ["admin"],
   devMail: ["admin"],
   calculator: ["admin", "planner", "manager", "agent", "analyst"],
