@@ -12,41 +12,43 @@ const line = (points: AlignmentInput["points"]): AlignmentInput => ({ units: "m"
 
 /**
  * Three invented alternatives for the Quillmere Eastern Bypass, drawn so their trade-offs differ:
- * the shortest skirts the town's east edge and takes houses; one swings around the eastern blocks
- * on a compound curve; one keeps to Marrow Brook's open ground and is longest.
+ * the shortest runs up the town's east edge and displaces dozens of buildings; one swings east on
+ * a compound curve through farmland (longer, far cheaper); one keeps to Marrow Brook's open ground
+ * and is longest, with the most land and a design-check warning.
  */
 export const DEMO_ALTERNATIVES: Pick<AlternativeInputs, "name" | "description" | "alignment" | "corridor">[] = [
   {
     name: "Town-edge line",
-    description: "Shortest: hugs the east edge of Quillmere and crosses Ostrand Pike close to town.",
+    description: "Shortest: runs up the east edge of Quillmere's blocks and crosses Ostrand Pike close to town.",
     corridor: CORRIDOR,
     alignment: line([
-      { x: 561150, y: 4417300 },
-      { x: 561750, y: 4419600, curve: { type: "simple", radius: 600 } },
-      { x: 561650, y: 4421000, curve: { type: "simple", radius: 450 } },
-      { x: 562100, y: 4422050 },
+      { x: 561900, y: 4418480 },
+      { x: 561650, y: 4419500, curve: { type: "simple", radius: 500 } },
+      { x: 561700, y: 4420900, curve: { type: "simple", radius: 450 } },
+      { x: 562000, y: 4421980 },
     ]),
   },
   {
     name: "Eastern swing",
-    description: "Swings east of the last blocks on a compound curve, then returns to the north tie-in.",
+    description: "Swings east of the last blocks on a compound curve through open farmland, then returns to the north tie-in.",
     corridor: CORRIDOR,
     alignment: line([
-      { x: 561150, y: 4417300 },
-      { x: 562350, y: 4418900, curve: { type: "compound", radius1: 650, radius2: 450, delta1: 14 } },
-      { x: 562550, y: 4420800, curve: { type: "simple", radius: 700 } },
-      { x: 562100, y: 4422050 },
+      { x: 561900, y: 4418480 },
+      { x: 562450, y: 4419300, curve: { type: "compound", radius1: 650, radius2: 450, delta1: 20 } },
+      { x: 562500, y: 4421000, curve: { type: "simple", radius: 700 } },
+      { x: 562000, y: 4421980 },
     ]),
   },
   {
     name: "Brookside line",
-    description: "Follows the open ground along Marrow Brook before turning north past Quill Mere: longest, fewest houses.",
+    description: "Keeps to the open ground north of Marrow Brook before turning north: longest and most land, with a short tangent between reversing curves.",
     corridor: CORRIDOR,
     alignment: line([
-      { x: 561150, y: 4417300 },
-      { x: 562950, y: 4419250, curve: { type: "simple", radius: 800 } },
-      { x: 563250, y: 4421250, curve: { type: "simple", radius: 600 } },
-      { x: 562100, y: 4422050 },
+      { x: 561900, y: 4418480 },
+      { x: 561950, y: 4419720, curve: { type: "simple", radius: 500 } },
+      { x: 563200, y: 4419520, curve: { type: "simple", radius: 600 } },
+      { x: 563250, y: 4421300, curve: { type: "simple", radius: 600 } },
+      { x: 562000, y: 4421980 },
     ]),
   },
 ];
