@@ -7,6 +7,7 @@ import { Badge } from "./ui/badge";
 
 const NAV: { to: string; label: string; area: Area }[] = [
   { to: "/projects", label: "Projects", area: "projects" },
+  { to: "/decisions", label: "Decisions", area: "decisions" },
   { to: "/work", label: "My parcels", area: "workList" },
   { to: "/calculator", label: "Curve calculator", area: "calculator" },
   { to: "/admin/users", label: "People", area: "manageUsers" },

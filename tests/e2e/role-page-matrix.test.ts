@@ -3,13 +3,13 @@ import { get, sessionCookie } from "./support/http";
 
 // Written out by hand on purpose: this is the product's access policy, checked against the running app.
 // 200 = may open, 403 = refused with the roles needed.
-const PAGES = ["/projects", "/projects/new", "/work", "/calculator", "/admin/users", "/dev/mail", "/account"] as const;
+const PAGES = ["/projects", "/projects/new", "/decisions", "/work", "/calculator", "/admin/users", "/dev/mail", "/account"] as const;
 const MATRIX: Record<string, Record<(typeof PAGES)[number], 200 | 403>> = {
-  "admin@demo.test": { "/projects": 200, "/projects/new": 403, "/work": 403, "/calculator": 200, "/admin/users": 200, "/dev/mail": 200, "/account": 200 },
-  "planner@demo.test": { "/projects": 200, "/projects/new": 200, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
-  "manager@demo.test": { "/projects": 200, "/projects/new": 403, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
-  "agent@demo.test": { "/projects": 403, "/projects/new": 403, "/work": 200, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
-  "analyst@demo.test": { "/projects": 200, "/projects/new": 403, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
+  "admin@demo.test": { "/projects": 200, "/projects/new": 403, "/decisions": 403, "/work": 403, "/calculator": 200, "/admin/users": 200, "/dev/mail": 200, "/account": 200 },
+  "planner@demo.test": { "/projects": 200, "/projects/new": 200, "/decisions": 200, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
+  "manager@demo.test": { "/projects": 200, "/projects/new": 403, "/decisions": 200, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
+  "agent@demo.test": { "/projects": 403, "/projects/new": 403, "/decisions": 403, "/work": 200, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
+  "analyst@demo.test": { "/projects": 200, "/projects/new": 403, "/decisions": 200, "/work": 403, "/calculator": 200, "/admin/users": 403, "/dev/mail": 403, "/account": 200 },
 };
 
 const cookies: Record<string, string> = {};
