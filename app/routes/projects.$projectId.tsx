@@ -1,4 +1,4 @@
-import { data, Form, useActionData, useLoaderData } from "react-router";
+import { data, Form, Link, useActionData, useLoaderData } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/projects.$projectId";
 import { Button } from "~/components/ui/button";
@@ -18,6 +18,13 @@ import { ProjectMap } from "~/components/map/project-map";
 import { LayerUpload } from "~/components/upload/layer-upload";
 import { listProjectLayers } from "~/models/layers.server";
 import { env } from "~/utils/env.server";
+import { AlternativeList } from "~/components/alternatives/alternative-list";
+import { NewAlternativeButton } from "~/components/alternatives/new-alternative-dialog";
+import { buttonClass } from "~/components/ui/button";
+import { findCrsByCode, parseEpsgCode } from "~/fabric/index.server";
+import { readLatestSummary } from "~/models/alternative-impacts.server";
+import { listAlternatives } from "~/models/alternatives.server";
+import { mayOpen } from "~/utils/access";
 
 const MemberChangeSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("add-member"), email: EmailSchema, role: z.enum(ROLES) }),
@@ -50,6 +57,19 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     mayManage: user.role === "planner" || user.role === "admin",
     mayUpload: user.role === "planner",
     basemapStyleUrl: env().BASEMAP_STYLE_URL,
+    ...alternativesOf(project, mayOpen(user.role, "editAlternatives")),
+  };
+}
+
+/** The project's alternatives for the list, and what "New alternative" needs to start one. */
+function alternativesOf(project: { id: number; crs: string | null }, mayEditAlternatives: boolean) {
+  const all = listAlternatives(project.id);
+  const code = project.crs ? parseEpsgCode(project.crs) : null;
+  return {
+    alternatives: all.map((a) => ({ id: a.id, name: a.name, colour: a.colour, status: a.status, version: a.version, summary: readLatestSummary(a.id) ?? null })),
+    mayEditAlternatives,
+    startingPoints: mayEditAlternatives ? all.map((a) => ({ id: a.id, name: a.name, alignment: a.alignment, corridor: a.corridor })) : [],
+    crsDefinition: code === null ? null : (findCrsByCode(code)?.proj4 ?? null),
   };
 }
 
@@ -71,7 +91,8 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function ProjectPage() {
-  const { project, layers, members, mayManage, mayUpload, basemapStyleUrl } = useLoaderData<typeof loader>();
+  const { project, layers, members, mayManage, mayUpload, basemapStyleUrl, alternatives, mayEditAlternatives, startingPoints, crsDefinition } = useLoaderData<typeof loader>();
+  const fabricBbox = layers.find((l) => l.kind === "parcels")?.bbox ?? null;
   const areaUnit = project.units === "m" ? "m²" : project.units === "ft" ? "ft²" : "US ft²";
   const result = useActionData<typeof action>();
   return (
@@ -94,6 +115,17 @@ export default function ProjectPage() {
           <ProjectMap layers={layers} basemapStyleUrl={basemapStyleUrl} areaUnit={areaUnit} />
         )}
         <p className="mt-3 text-xs text-ink-soft">Areas are computed in the working CRS{project.crs ? ` (${project.crs})` : ""} from the uploaded fabric; they are not surveyed areas.</p>
+      </Card>
+      <Card
+        title="Alternatives"
+        actions={
+          <>
+            {alternatives.length > 0 && <Link to={`/projects/${project.id}/comparison`} className={buttonClass("secondary")}>Compare alternatives</Link>}
+            {mayEditAlternatives && <NewAlternativeButton projectId={project.id} units={project.units} existing={startingPoints} fabricBbox={fabricBbox} crsDefinition={crsDefinition} />}
+          </>
+        }
+      >
+        <AlternativeList projectId={project.id} units={project.units} alternatives={alternatives} />
       </Card>
       <Card title="Layers">
         <Table

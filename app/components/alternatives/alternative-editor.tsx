@@ -4,6 +4,7 @@ import { EMPTY_OVERLAY, toOverlayData } from "~/components/map/overlay-data";
 import type { MapLayerInfo } from "~/components/map/project-map";
 import { createWorkingCrs, type Xy } from "~/components/map/working-crs";
 import { Card } from "~/components/ui/card";
+import { applyCheckAcceptances } from "~/calculations/check-acceptances";
 import { AffectedParcels } from "./affected-parcels";
 import type { AlternativeDraft, AlternativeJson } from "./api-types";
 import { CurveElements } from "./curve-elements";
@@ -54,30 +55,32 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
     onSelect: setSelected,
   }), [edits]);
   const summary = result?.summary ?? alternative.summary ?? null;
+  // The preview reviews checks against the saved acceptances; show the draft's own at once.
+  const checks = useMemo(() => (result ? applyCheckAcceptances(result.checks.map(({ accepted: _, ...c }) => c), editor.draft.acceptedChecks).checks : []), [result, editor.draft.acceptedChecks]);
 
   return (
     <div className="space-y-6">
       <EditorHeader alternative={alternative} projectId={projectId} projectName={projectName} editable={editable} editor={editor} save={autosave.state} onRetry={() => void autosave.flush()} />
       <EstimateNotice />
-      <Card title="Map">
-        <AlternativeEditorMap layers={layers} basemapStyleUrl={basemapStyleUrl} metric={units === "m"} crs={crs} points={points} overlay={overlay} colour={alternative.colour}
-          editable={editable} selected={selected} onSelect={setSelected}
-          onDrag={(i, xy) => edits.move(i, xy, true)} onDragEnd={() => editor.endDrag()} onNudge={edits.nudge} onDelete={edits.remove} onAddPoint={edits.add} />
-      </Card>
-      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
-        <Card title="Points of intersection">
-          <PiTable alignment={editor.draft.alignment} curves={result?.geometry.curves ?? []} selected={selected} editable={editable} error={preview.error} actions={tableActions} />
+      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+        <Card title="Map">
+          <AlternativeEditorMap layers={layers} basemapStyleUrl={basemapStyleUrl} metric={units === "m"} crs={crs} points={points} overlay={overlay} colour={alternative.colour}
+            editable={editable} selected={selected} onSelect={setSelected}
+            onDrag={(i, xy) => edits.move(i, xy, true)} onDragEnd={() => editor.endDrag()} onNudge={edits.nudge} onDelete={edits.remove} onAddPoint={edits.add} />
         </Card>
         <Card title="Land take">
           {summary ? <TakeTotals summary={summary} units={units} pending={preview.pending} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>
       </div>
+      <Card title="Points of intersection">
+        <PiTable alignment={editor.draft.alignment} curves={result?.geometry.curves ?? []} selected={selected} editable={editable} error={preview.error} actions={tableActions} />
+      </Card>
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <Card title="Computed elements">
           {result ? <CurveElements curves={result.geometry.curves} stations={result.geometry.stations} length={result.geometry.length} unit={lengthUnitLabel(units)} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>
         <Card title="Design checks">
-          {result ? <DesignChecksPanel checks={result.checks} editable={editable} onAccept={edits.accept} onWithdraw={edits.withdraw} /> : <p className="text-sm text-ink-soft">Computing…</p>}
+          {result ? <DesignChecksPanel checks={checks} editable={editable} onAccept={edits.accept} onWithdraw={edits.withdraw} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>
       </div>
       <Card title="Corridor and design">

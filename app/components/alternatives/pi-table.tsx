@@ -69,7 +69,7 @@ export function PiTable({ alignment, curves, selected, editable, error, actions 
 
 function buildColumns(unit: string, editable: boolean, a: PiTableActions, count: number) {
   const num = (label: string, value: number, commit: (v: number) => void, min?: number, max?: number) =>
-    editable ? <NumberInput label={label} value={value} onCommit={commit} min={min} max={max} /> : <span className="block text-right tabular-nums">{value.toLocaleString("en", { maximumFractionDigits: 3 })}</span>;
+    editable ? <NumberInput label={label} value={value} onCommit={commit} min={min} max={max} className="min-w-28" /> : <span className="block text-right tabular-nums">{value.toLocaleString("en", { maximumFractionDigits: 3 })}</span>;
   return [
     col.accessor("label", { header: "Point", cell: (c) => <span className="font-semibold whitespace-nowrap">{c.getValue()}</span> }),
     col.accessor("x", { header: `x (${unit})`, cell: (c) => num(`${c.row.original.label} x`, c.getValue(), (v) => a.onMove(c.row.original.index, v, c.row.original.y)) }),

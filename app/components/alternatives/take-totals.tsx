@@ -24,7 +24,7 @@ export function TakeTotals({ summary, units, pending }: { summary: AlternativeSu
   ];
   return (
     <div className="space-y-4" data-testid="take-totals" aria-busy={pending}>
-      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm">
+      <dl className="grid grid-cols-1 gap-y-1 text-sm">
         {figures.map(([key, label, value]) => (
           <div key={key} className="flex justify-between gap-2 border-b border-rule py-1">
             <dt className="text-ink-soft">{label}</dt>

@@ -31,6 +31,7 @@ export function usePreview(alternativeId: number, draft: AlternativeDraft, live:
 
   useEffect(() => {
     latest.current = draft;
+    setState((s) => (s.pending ? s : { ...s, pending: true }));
     if (live) schedule();
     else {
       flight.current?.controller.abort();
