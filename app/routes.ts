@@ -11,6 +11,8 @@ export default [
   route("projects", "routes/projects._index.tsx"),
   route("projects/new", "routes/projects.new.tsx"),
   route("projects/:projectId", "routes/projects.$projectId.tsx"),
+  route("projects/:projectId/alternatives/:alternativeId", "routes/projects.$projectId.alternatives.$alternativeId.tsx"),
+  route("projects/:projectId/comparison", "routes/projects.$projectId.comparison.tsx"),
   route("work", "routes/work.tsx"),
   route("work/:caseId", "routes/work.$caseId.tsx"),
   route("decisions", "routes/decisions.tsx"),
