@@ -20,4 +20,6 @@ export { METRES_PER_UNIT, convertArea, convertLength, type LengthUnit } from "./
 export { polygonArea, ringArea } from "./geometry/area";
 export { FEATURE_ID_SOURCE, TARGET_ATTRIBUTES, guessFieldMapping, type FieldMapping, type TargetAttribute } from "./attributes/field-mapping";
 export { applyFieldMapping, type LandValueBasis, type MappedAttributes } from "./attributes/apply-mapping";
-export { buildTileIndex, encodeTile, type TileIndex } from "./tiles/vector-tiles";
+export { encodeTileFeatures, isTileInPyramid, sliceTile, tileBoundsWgs84, TILE_EXTENT, type TileFeature } from "./tiles/vector-tiles";
+export { indexOverview, overviewTile, worldXY, type OverviewIndex, type OverviewItem, type OverviewOptions, type OverviewProperties, type OverviewTile } from "./tiles/overview";
+export { TileCache, type CachedTile } from "./tiles/tile-cache";

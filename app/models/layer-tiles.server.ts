@@ -1,52 +1,57 @@
 import { createHash } from "node:crypto";
-import { eq } from "drizzle-orm";
-import type { Feature, FeatureCollection } from "geojson";
-import { buildings, parcels } from "~/db/schema";
-import { buildTileIndex, encodeTile, type TileIndex } from "~/fabric/index.server";
+import { encodeTileFeatures, indexOverview, isTileInPyramid, overviewTile, sliceTile, TileCache, tileBoundsWgs84, type CachedTile, type OverviewIndex, type TileFeature } from "~/fabric/index.server";
 import { db, type Db } from "~/utils/db.server";
+import { workingProj4 } from "./layer-envelope.server";
+import { overviewItems, tileFeaturesById, tileFeaturesInBox } from "./layer-tile-sources.server";
 import type { Layer } from "./layers.server";
 
-/** Indexes kept in memory; the oldest used is dropped past this many layers. */
-const MAX_CACHED_LAYERS = 8;
-const cache = new Map<number, TileIndex>();
+/**
+ * Zooms up to this one draw the generalised overview (small parcels coalesced into 4-px cells,
+ * see `overviewTile`); deeper zooms draw every parcel. At z12 a 20 m lot is under 2 px across.
+ */
+export const OVERVIEW_MAX_ZOOM = 12;
+/** Layers whose overview index stays in memory; the least recently used is dropped past this. */
+const MAX_OVERVIEW_LAYERS = 8;
+/** Encoded tiles kept, by bytes, across all layers. */
+const TILE_CACHE_BYTES = 96 * 1024 * 1024;
 
-/** MVT properties cannot be null (MVT 2.1 §4.5.1 values are typed), so absent values are left out. */
-function withoutNulls(props: Record<string, string | number | null>): Record<string, string | number> {
-  return Object.fromEntries(Object.entries(props).filter(([, v]) => v !== null)) as Record<string, string | number>;
-}
+const overviews = new Map<number, OverviewIndex>();
+const tiles = new TileCache(TILE_CACHE_BYTES);
 
-function layerFeaturesWgs84(layer: Layer, tx: Db): FeatureCollection {
-  const features: Feature[] =
-    layer.kind === "parcels"
-      ? tx.select({ id: parcels.id, g: parcels.geometryWgs84, parcelId: parcels.parcelId, owner: parcels.owner, landUse: parcels.landUse, landValue: parcels.landValue, area: parcels.area })
-          .from(parcels).where(eq(parcels.layerId, layer.id)).all()
-          .map(({ id, g, ...props }) => ({ type: "Feature", id, geometry: JSON.parse(g), properties: withoutNulls(props) }))
-      : tx.select({ id: buildings.id, g: buildings.geometryWgs84, parcelId: buildings.parcelId, value: buildings.value, area: buildings.area })
-          .from(buildings).where(eq(buildings.layerId, layer.id)).all()
-          .map(({ id, g, ...props }) => ({ type: "Feature", id, geometry: JSON.parse(g), properties: withoutNulls(props) }));
-  return { type: "FeatureCollection", features };
-}
-
-function indexFor(layer: Layer, tx: Db): TileIndex {
-  let index = cache.get(layer.id);
-  if (index) cache.delete(layer.id);
-  else index = buildTileIndex(layerFeaturesWgs84(layer, tx));
-  cache.set(layer.id, index);
-  while (cache.size > MAX_CACHED_LAYERS) cache.delete(cache.keys().next().value!);
+function overviewFor(layer: Layer, working: string | undefined, tx: Db): OverviewIndex {
+  let index = overviews.get(layer.id);
+  if (index) overviews.delete(layer.id);
+  else index = indexOverview(overviewItems(layer, working, tx));
+  overviews.set(layer.id, index);
+  while (overviews.size > MAX_OVERVIEW_LAYERS) overviews.delete(overviews.keys().next().value!);
   return index;
 }
 
-/** Drops a layer's cached tile index; call whenever the layer's rows or status change. */
+/** The features of tile z/x/y: every feature at detail zooms; cells plus the large features at overview zooms. */
+function tileFeatures(layer: Layer, working: string | undefined, z: number, x: number, y: number, tx: Db): TileFeature[] {
+  if (z > OVERVIEW_MAX_ZOOM) return sliceTile(tileFeaturesInBox(layer, working, tileBoundsWgs84(z, x, y), tx), z, x, y);
+  const { cells, wholeIds } = overviewTile(overviewFor(layer, working, tx), z, x, y);
+  return [...cells, ...sliceTile(tileFeaturesById(layer, wholeIds, tx), z, x, y)];
+}
+
+/** Drops a layer's overview index and cached tiles; call whenever the layer's rows or status change. */
 export function forgetLayerTiles(layerId: number): void {
-  cache.delete(layerId);
+  overviews.delete(layerId);
+  tiles.forgetLayer(layerId);
 }
 
 /**
  * One Mapbox Vector Tile of a layer (source layer named by its kind) with an ETag from the
- * bytes, or null for a tile no feature touches.
+ * bytes, or null for a tile no feature touches. Detail tiles are sliced from the rows the
+ * R*Tree finds under the tile; encoded tiles are cached until the layer is forgotten.
  */
-export function readLayerTile(layer: Layer, z: number, x: number, y: number, tx: Db = db()): { bytes: Uint8Array; etag: string } | null {
-  const bytes = encodeTile(indexFor(layer, tx), z, x, y, layer.kind);
-  if (!bytes) return null;
-  return { bytes, etag: `"${createHash("sha256").update(bytes).digest("base64url").slice(0, 27)}"` };
+export function readLayerTile(layer: Layer, project: { crs: string | null }, z: number, x: number, y: number, tx: Db = db()): CachedTile {
+  if (!isTileInPyramid(z, x, y)) return null;
+  const key = `${layer.id}/${z}/${x}/${y}`;
+  const cached = tiles.get(key);
+  if (cached !== undefined) return cached;
+  const bytes = encodeTileFeatures(tileFeatures(layer, workingProj4(project), z, x, y, tx), layer.kind);
+  const tile = bytes ? { bytes, etag: `"${createHash("sha256").update(bytes).digest("base64url").slice(0, 27)}"` } : null;
+  tiles.set(key, tile);
+  return tile;
 }

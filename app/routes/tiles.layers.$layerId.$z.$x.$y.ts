@@ -33,7 +33,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { layerId, z, x, y } = parsed.data;
   const found = findLayerForUser(layerId, user);
   if (!found) return new Response(null, { status: 404 });
-  const tile = readLayerTile(found.layer, z, x, y);
+  const tile = readLayerTile(found.layer, found.project, z, x, y);
   // Members only, so caches may keep tiles for this browser alone, and must revalidate.
   const headers = { "Cache-Control": "private, no-cache", Vary: "Cookie" };
   if (!tile) return new Response(null, { status: 204, headers });
