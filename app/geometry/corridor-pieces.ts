@@ -38,13 +38,13 @@ export function flatRingArea(flat: ArrayLike<number>): number {
   return s / 2;
 }
 
-/** Exact text of a quad's geometry for caches (numbers round-trip). */
-export function quadKey(p: Pick<QuadPiece, "corners" | "stationFrom" | "stationTo">): string {
-  return `q${p.corners.map((c) => `${c[0]},${c[1]}`).join(";")};${p.stationTo - p.stationFrom}`;
+/** Exact text of everything a take measurement reads from a quad (numbers round-trip), for caches. */
+export function quadKey(p: Pick<QuadPiece, "corners" | "length" | "along">): string {
+  return `q${p.corners.map((c) => `${c[0]},${c[1]}`).join(";")};${p.length};${p.along.join(",")}`;
 }
 
-/** Exact text of an annular slice's geometry for caches. */
-export function annularKey(p: Pick<AnnularPiece, "center" | "rayFrom" | "rayTo" | "inner" | "outer" | "turn" | "stationFrom" | "stationTo" | "centerlineRadius">): string {
+/** Exact text of everything a take measurement reads from an annular slice, for caches. */
+export function annularKey(p: Pick<AnnularPiece, "center" | "rayFrom" | "rayTo" | "inner" | "outer" | "turn" | "length" | "centerlineRadius" | "sweepRad">): string {
   const side = (s: AnnularPiece["inner"]) => `${s.center[0]},${s.center[1]},${s.radius}`;
-  return `a${p.center[0]},${p.center[1]};${p.rayFrom[0]},${p.rayFrom[1]};${p.rayTo[0]},${p.rayTo[1]};${side(p.inner)};${side(p.outer)};${p.turn};${p.centerlineRadius};${p.stationTo - p.stationFrom}`;
+  return `a${p.center[0]},${p.center[1]};${p.rayFrom[0]},${p.rayFrom[1]};${p.rayTo[0]},${p.rayTo[1]};${side(p.inner)};${side(p.outer)};${p.turn};${p.centerlineRadius};${p.length};${p.sweepRad}`;
 }

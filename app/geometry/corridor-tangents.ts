@@ -58,17 +58,23 @@ function makeQuad(e: TangentElement, elementIndex: number, from: Cut, to: Cut, u
     elementIndex,
     stationFrom,
     stationTo,
+    length: to.t - from.t,
     corners,
     bounds: boundsOf(corners),
     area: flatRingArea(local),
     tapered: profile.left(stationFrom) !== profile.left(stationTo) || profile.right(stationFrom) !== profile.right(stationTo),
     key: "",
-    axisOrigin: addVec(e.start, scaleVec(u, from.t)),
-    direction: u,
+    along: alongAxis(u, subVec(o, addVec(e.start, scaleVec(u, from.t)))),
     local,
   };
   piece.key = quadKey(piece);
   return piece;
+}
+
+function alongAxis(u: Vec2, cornerFromAxis: Vec2): [number, number, number] {
+  const ux = Math.round(u[0] * 1e12) / 1e12;
+  const uy = Math.round(u[1] * 1e12) / 1e12;
+  return [ux, uy, Math.round((cornerFromAxis[0] * ux + cornerFromAxis[1] * uy) * 1e9) / 1e9];
 }
 
 /** Every corner turns left (counter-clockwise) and the area is positive; else the lines crossed. */

@@ -17,6 +17,8 @@ interface PieceBase {
   /** Internal stations of the centreline the piece spans. */
   stationFrom: number;
   stationTo: number;
+  /** Centreline length of the piece from its own geometry (not a difference of stations, so it does not change when stations shift). */
+  length: number;
   /** Corners counter-clockwise: start right, end right, end left, start left (looking ahead). */
   corners: [Vec2, Vec2, Vec2, Vec2];
   bounds: Bounds;
@@ -31,9 +33,12 @@ interface PieceBase {
 /** A convex quadrilateral along a tangent (a trapezoid where a width tapers). */
 export interface QuadPiece extends PieceBase {
   kind: "quad";
-  /** Centreline point at `stationFrom` and unit direction ahead. */
-  axisOrigin: Vec2;
-  direction: Vec2;
+  /**
+   * Distance along the piece of a point v: (v − corners[0])·[ux, uy] + offset, with the direction
+   * rounded to 1e-12 and the offset to 1e-9 units — plenty for a station span, and it keeps a
+   * cached span valid when round-off alone changes the tangent's direction.
+   */
+  along: [number, number, number];
   /** Corners relative to `corners[0]`, flat `[x0, y0, x1, y1, …]`, counter-clockwise. */
   local: number[];
 }

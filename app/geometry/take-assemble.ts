@@ -1,8 +1,9 @@
-import type { Corridor } from "./corridor-types";
+import type { Corridor, CorridorPiece } from "./corridor-types";
 import { OVERLAP_WARNING_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
 import { classifyTake, costTake } from "./take-costs";
 import type { ParcelMeasure } from "./take-parcel";
 import type { PreparedShape } from "./take-shapes";
+import { spanStations } from "./take-span";
 import type { ParcelTake, TakeParcelInput, TakeResult, TakeRules } from "./take-types";
 import { roundForMessage } from "./validate";
 
@@ -16,17 +17,24 @@ export interface BuildingFinding {
   span: [number, number] | null;
 }
 
+/** A parcel's measured geometry with the right-of-way and widened pieces it was measured on. */
+export interface MeasuredParcel {
+  measure: ParcelMeasure;
+  row: CorridorPiece[];
+  wide: CorridorPiece[];
+}
+
 interface AssembleInput {
   row: Corridor;
   parcels: TakeParcelInput[];
   parcelShapes: PreparedShape[];
-  measures: Map<number, { measure: ParcelMeasure; base: number }>;
+  measures: Map<number, MeasuredParcel>;
   findings: BuildingFinding[];
   rules: TakeRules;
   buildingValue: (building: number) => number;
 }
 
-const EMPTY: ParcelMeasure = { takeArea: 0, easementArea: 0, remainderArea: 0, pieceAreas: [], span: null };
+const EMPTY: ParcelMeasure = { takeArea: 0, easementArea: 0, remainderArea: 0, pieceAreas: [], span: null, spanOn: "row" };
 
 /**
  * One `ParcelTake` per parcel with a take, an easement or a displaced building, in station order;
@@ -76,7 +84,7 @@ function parcelTake(a: AssembleInput, i: number, found: BuildingFinding[]): Parc
   const hasTake = m.takeArea > TAKE_MIN_AREA;
   const classification = hasTake ? classifyTake(parcelArea, m.pieceAreas, a.rules) : "partial";
   const hit = found.filter((f) => f.hit);
-  const span = m.span && entry ? [m.span[0] + entry.base, m.span[1] + entry.base] : spanOfBuildings(hit);
+  const span = m.span && entry ? spanStations(m.span, m.spanOn === "row" ? entry.row : entry.wide) : spanOfBuildings(hit);
   const cost = costTake(
     { parcelArea, takeArea: m.takeArea, easementArea: m.easementArea, classification, landValuePerArea: input.landValuePerArea ?? a.rules.landValuePerArea, buildingValues: hit.map((f) => a.buildingValue(f.building)) },
     a.rules,

@@ -4,20 +4,20 @@ import type { CorridorPiece } from "./corridor-types";
 import { clippedArea, clipRingConvex } from "./take-clip";
 import { pieceAreas } from "./take-parcel";
 import type { PreparedShape } from "./take-shapes";
+import type { RelativeSpan } from "./take-span";
 
 /** Footprint overlaps with the right-of-way and with the proximity band (square units). */
 export interface BuildingMeasure {
   hitArea: number;
   nearArea: number;
-  /** Stations the hit spans, minus `base`; null when the right-of-way does not reach it. */
-  span: [number, number] | null;
+  /** Stations the hit spans on the right-of-way pieces measured; null when it does not reach it. */
+  span: RelativeSpan | null;
 }
 
 /** Exact overlaps of a footprint with the right-of-way pieces and the widened (proximity) pieces near it. */
-export function measureBuilding(shape: PreparedShape, row: CorridorPiece[], near: CorridorPiece[], base: number): BuildingMeasure {
+export function measureBuilding(shape: PreparedShape, row: CorridorPiece[], near: CorridorPiece[]): BuildingMeasure {
   const hit = pieceAreas(shape, row);
-  const span: [number, number] | null = hit.span ? [hit.span[0] - base, hit.span[1] - base] : null;
-  return { hitArea: hit.total, nearArea: pieceAreas(shape, near).total, span };
+  return { hitArea: hit.total, nearArea: pieceAreas(shape, near).total, span: hit.span };
 }
 
 /**

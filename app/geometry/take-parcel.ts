@@ -4,6 +4,7 @@ import type { CorridorPiece } from "./corridor-types";
 import { polygonPieceArea } from "./take-piece-area";
 import { remainderPieceAreas } from "./take-remainder";
 import type { PreparedShape } from "./take-shapes";
+import type { RelativeSpan } from "./take-span";
 
 /** What the corridor does to one parcel's geometry (independent of rules and costs). */
 export interface ParcelMeasure {
@@ -13,8 +14,9 @@ export interface ParcelMeasure {
   remainderArea: number;
   /** Remainder pieces, largest first, slivers dropped (with no take: the parcel's own polygons). */
   pieceAreas: number[];
-  /** Centreline stations the take spans (the easement's when there is no take), minus `base`. */
-  span: [number, number] | null;
+  /** Stations the take spans (the easement's when there is none), on the `row` or `wide` pieces measured. */
+  span: RelativeSpan | null;
+  spanOn: "row" | "wide";
 }
 
 /**
@@ -22,7 +24,7 @@ export interface ParcelMeasure {
  * `wide` are the right-of-way and widened (easement) pieces whose bounds meet the parcel's; `all`
  * is the whole right-of-way (for the corridor boundary when the remainder splits).
  */
-export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: CorridorPiece[] | null, all: CorridorPiece[], base: number): ParcelMeasure {
+export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: CorridorPiece[] | null, all: CorridorPiece[]): ParcelMeasure {
   const rowAreas = pieceAreas(shape, row);
   const takeArea = clampArea(rowAreas.total, shape.area);
   const wideAreas = wide ? pieceAreas(shape, wide) : null;
@@ -37,17 +39,18 @@ export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: 
   } else {
     for (const polygon of shape.polygons) if (polygon.area >= SLIVER_AREA) pieces.push(polygon.area);
   }
-  const span = takeArea > TAKE_MIN_AREA ? rowAreas.span : wideAreas && easementArea > TAKE_MIN_AREA ? wideAreas.span : null;
-  return { takeArea, easementArea, remainderArea: Math.max(0, shape.area - takeArea), pieceAreas: pieces, span: span ? [span[0] - base, span[1] - base] : null };
+  const onRow = takeArea > TAKE_MIN_AREA || !wideAreas;
+  const span = onRow ? rowAreas.span : wideAreas.span;
+  return { takeArea, easementArea, remainderArea: Math.max(0, shape.area - takeArea), pieceAreas: pieces, span, spanOn: onRow ? "row" : "wide" };
 }
 
 /** Exact area of (shape ∩ pieces), in total and per polygon of the shape, and the stations it spans. */
-export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPolygon: number[]; span: [number, number] | null } {
+export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPolygon: number[]; span: RelativeSpan | null } {
   const perPolygon = shape.polygons.map(() => 0);
-  const span: [number, number] = [Infinity, -Infinity];
+  let span: RelativeSpan | null = null;
   const pieceSpan: [number, number] = [Infinity, -Infinity];
   let total = 0;
-  for (const piece of pieces) {
+  pieces.forEach((piece, k) => {
     let inPiece = 0;
     pieceSpan[0] = Infinity;
     pieceSpan[1] = -Infinity;
@@ -59,9 +62,21 @@ export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { tot
     });
     total += inPiece;
     // A piece the shape only touches must not stretch the span.
-    if (inPiece > TAKE_MIN_AREA) [span[0], span[1]] = [Math.min(span[0], pieceSpan[0]), Math.max(span[1], pieceSpan[1])];
-  }
-  return { total, perPolygon, span: span[0] <= span[1] ? span : null };
+    if (inPiece > TAKE_MIN_AREA && pieceSpan[0] <= pieceSpan[1]) span = widen(span, k, pieceSpan);
+  });
+  return { total, perPolygon, span };
+}
+
+/**
+ * Widens a relative span with piece k's extremes. Pieces are listed in station order, so (k, along)
+ * compare lexicographically — from geometry alone, so a cached and a fresh span pick the same end.
+ */
+function widen(span: RelativeSpan | null, k: number, along: [number, number]): RelativeSpan {
+  const from: [number, number] = [k, along[0]];
+  const to: [number, number] = [k, along[1]];
+  if (!span) return { from, to };
+  const before = (a: [number, number], b: [number, number]) => a[0] < b[0] || (a[0] === b[0] && a[1] < b[1]);
+  return { from: before(from, span.from) ? from : span.from, to: before(span.to, to) ? to : span.to };
 }
 
 /** Round-off can take an area a hair below 0 or above the parcel's; an area is never outside [0, parcel]. */

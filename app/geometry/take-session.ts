@@ -1,7 +1,8 @@
 import type { AlignmentElement } from "./alignment-types";
 import { buildCorridor, buildWidened, resolvePieceOptions } from "./corridor-build";
 import type { Corridor, CorridorPiece } from "./corridor-types";
-import { assembleTakeResult, type BuildingFinding } from "./take-assemble";
+import { assembleTakeResult, type BuildingFinding, type MeasuredParcel } from "./take-assemble";
+import { spanStations } from "./take-span";
 import { measureBuilding, findOwnerParcel, type BuildingMeasure } from "./take-buildings";
 import { createKeyInterner, indexBounds, type BoundsIndex } from "./take-index";
 import { measureParcel, type ParcelMeasure } from "./take-parcel";
@@ -50,15 +51,14 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
   const interner = createKeyInterner();
   const stats: TakeSessionStats = { candidates: 0, measured: 0, reused: 0 };
 
-  const keyOf = (groups: CorridorPiece[][]): { key: string; base: number } => {
-    let base = Infinity;
-    for (const g of groups) for (const p of g) if (p.stationFrom < base) base = p.stationFrom;
+  // Geometry only: spans are kept relative to the pieces, so stations can shift under a cached value.
+  const keyOf = (groups: CorridorPiece[][]): string => {
     let key = String(interner.generation());
     for (const g of groups) {
       key += "|";
-      for (const p of g) key += interner.id(p.key) + "@" + (p.stationFrom - base) + ",";
+      for (const p of g) key += interner.id(p.key) + ",";
     }
-    return { key, base };
+    return key;
   };
 
   const ownerOf = (j: number): { index: number; parcelId: string | null } => {
@@ -81,22 +81,22 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
     const rowIdx = indexPieces(row);
     const wideIdx = wide ? indexPieces(wide) : null;
     Object.assign(stats, { candidates: 0, measured: 0, reused: 0 });
-    const measures = new Map<number, { measure: ParcelMeasure; base: number }>();
+    const measures = new Map<number, MeasuredParcel>();
     for (const i of candidatesOf(wide ?? row, parcelIndex)) {
       const shape = parcelShapes[i]!;
       const rowHits = hitsOf(row, rowIdx, shape);
       const wideHits = wide && wideIdx ? hitsOf(wide, wideIdx, shape) : [];
       if (rowHits.length + wideHits.length === 0) continue;
       stats.candidates++;
-      const { key, base } = keyOf([rowHits, wideHits]);
+      const key = keyOf([rowHits, wideHits]);
       let cached = parcelCache[i];
       if (cached?.key === key) stats.reused++;
       else {
-        cached = { key, value: measureParcel(shape, rowHits, wide ? wideHits : null, row.pieces, base) };
+        cached = { key, value: measureParcel(shape, rowHits, wide ? wideHits : null, row.pieces) };
         parcelCache[i] = cached;
         stats.measured++;
       }
-      measures.set(i, { measure: cached.value, base });
+      measures.set(i, { measure: cached.value, row: rowHits, wide: wideHits });
     }
     const findings = buildings.length > 0 ? findBuildings(elements, corridor, rules, row, rowIdx) : [];
     return assembleTakeResult({ row, parcels, parcelShapes, measures, findings, rules, buildingValue: (j) => buildings[j]!.value ?? rules.buildingValue });
@@ -111,13 +111,13 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
       const shape = buildingShapes[j]!;
       const rowHits = hitsOf(row, rowIdx, shape);
       const proxHits = hitsOf(prox, proxIdx, shape);
-      const { key, base } = keyOf([rowHits, proxHits]);
+      const key = keyOf([rowHits, proxHits]);
       let cached = buildingCache[j];
-      if (cached?.key !== key) buildingCache[j] = cached = { key, value: measureBuilding(shape, rowHits, proxHits, base) };
+      if (cached?.key !== key) buildingCache[j] = cached = { key, value: measureBuilding(shape, rowHits, proxHits) };
       const m = cached.value;
       const hit = m.hitArea > BUILDING_HIT_AREA;
       if (!hit && !(m.nearArea > TAKE_MIN_AREA)) continue;
-      found.push({ building: j, buildingId: buildings[j]!.buildingId, hit, owner: ownerOf(j), span: m.span ? [m.span[0] + base, m.span[1] + base] : null });
+      found.push({ building: j, buildingId: buildings[j]!.buildingId, hit, owner: ownerOf(j), span: m.span ? spanStations(m.span, rowHits) : null });
     }
     return found;
   }

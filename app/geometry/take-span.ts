@@ -1,24 +1,36 @@
-import type { AnnularPiece, QuadPiece } from "./corridor-types";
+import type { AnnularPiece, CorridorPiece, QuadPiece } from "./corridor-types";
 import type { ClippedRing } from "./take-clip";
 import { circleInterval } from "./take-intervals";
 
 /**
- * Station extremes (internal) of a clipped ring inside a piece, added to `span`. A quad: the
- * clipped vertices projected on the tangent. A slice: the angles, from the slice's first ray, of
- * the clipped vertices inside the annulus and of the points where clipped edges cross either
- * circle — the extremes of the region's angle lie among them. Coordinates are relative to the
- * piece (its first corner, or its centre).
+ * A station span kept relative to pieces — each end is [index in a list of pieces, distance along
+ * that piece] — so that a cached span stays exact when the pieces' stations shift: the stations
+ * are `pieces[k].stationFrom + along`, the same sum in a cached and in a fresh computation.
+ */
+export interface RelativeSpan {
+  from: [number, number];
+  to: [number, number];
+}
+
+/** Internal stations of a relative span on the given pieces. */
+export function spanStations(span: RelativeSpan, pieces: CorridorPiece[]): [number, number] {
+  return [pieces[span.from[0]]!.stationFrom + span.from[1], pieces[span.to[0]]!.stationFrom + span.to[1]];
+}
+
+/**
+ * Extremes of distance along a piece (from its `stationFrom`) reached by a clipped ring inside
+ * it, added to `span`. A quad: the clipped vertices projected on the tangent. A slice: the angles,
+ * from the slice's first ray, of the clipped vertices inside the annulus and of the points where
+ * clipped edges cross either circle — the extremes of the region's angle lie among them.
+ * Coordinates are relative to the piece (its first corner, or its centre).
  */
 export function extendQuadSpan(c: ClippedRing, piece: QuadPiece, span: [number, number]): void {
-  const o = piece.corners[0];
-  const len = piece.stationTo - piece.stationFrom;
-  const [ux, uy] = piece.direction;
-  const bx = o[0] - piece.axisOrigin[0];
-  const by = o[1] - piece.axisOrigin[1];
+  const len = piece.length;
+  const [ux, uy, offset] = piece.along;
   const d = c.data;
   for (let i = 0; i < c.length; i += 2) {
-    const along = Math.min(len, Math.max(0, (d[i]! + bx) * ux + (d[i + 1]! + by) * uy));
-    include(span, piece.stationFrom + along);
+    const along = Math.min(len, Math.max(0, d[i]! * ux + d[i + 1]! * uy + offset));
+    include(span, along);
   }
 }
 
@@ -47,12 +59,12 @@ function inAnnulus(piece: AnnularPiece, x: number, y: number): boolean {
   return Math.hypot(x - o.center[0], y - o.center[1]) <= o.radius + slack && Math.hypot(x - i.center[0], y - i.center[1]) >= i.radius - slack;
 }
 
-/** Station of the centreline at the angle of a point (relative to the centre) from the first ray. */
+/** Distance along the centreline from the slice's first ray to the angle of a point (relative to the centre). */
 function stationAtPoint(piece: AnnularPiece, x: number, y: number): number {
   const [fx, fy] = piece.rayFrom;
   const theta = piece.turn * Math.atan2(fx * y - fy * x, fx * x + fy * y);
   const q = Math.min(1, Math.max(0, theta / piece.sweepRad));
-  return piece.stationFrom + q * (piece.stationTo - piece.stationFrom);
+  return q * piece.length;
 }
 
 function include(span: [number, number], s: number): void {
