@@ -2,7 +2,7 @@ import type { AlignmentElement } from "./alignment-types";
 import { buildArcPieces } from "./corridor-arcs";
 import { computeJoints } from "./corridor-joints";
 import { buildTangentPieces } from "./corridor-tangents";
-import { PIECE_LENGTH_IN_WIDTHS, SPIRAL_FIT_TOLERANCE } from "./corridor-tolerances";
+import { MIN_PIECE_LENGTH, PIECE_LENGTH_IN_WIDTHS, SPIRAL_FIT_TOLERANCE } from "./corridor-tolerances";
 import type { BuildCorridorOptions, Corridor, CorridorPiece } from "./corridor-types";
 import { createWidthProfile, widenCorridorInput } from "./corridor-widths";
 import { GeometryInputError } from "./errors";
@@ -44,7 +44,7 @@ export function buildWidened(elements: AlignmentElement[], input: CorridorInput,
 /** The options `buildCorridor` uses for this input: defaults filled in and checked. */
 export function resolvePieceOptions(input: CorridorInput, options: BuildCorridorOptions = {}): Required<BuildCorridorOptions> {
   const width = input.left + input.right;
-  const fallback = Number.isFinite(width) && width > 0 ? PIECE_LENGTH_IN_WIDTHS * width : 1; // bad widths are reported by the width check
+  const fallback = Number.isFinite(width) && width > 0 ? Math.max(MIN_PIECE_LENGTH, PIECE_LENGTH_IN_WIDTHS * width) : 1; // bad widths are reported by the width check
   return {
     pieceLength: requirePositive(options.pieceLength ?? fallback, "pieceLength"),
     spiralTolerance: requirePositive(options.spiralTolerance ?? SPIRAL_FIT_TOLERANCE, "spiralTolerance"),

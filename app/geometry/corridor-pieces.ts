@@ -21,16 +21,22 @@ export function boundsOverlap(a: Bounds, b: Bounds): boolean {
   return a[0] <= b[2] && b[0] <= a[2] && a[1] <= b[3] && b[1] <= a[3];
 }
 
-/** Signed shoelace area of a flat ring `[x0, y0, x1, y1, …]` (Gauss's area formula), counter-clockwise positive. */
+/**
+ * Signed shoelace area of a flat ring `[x0, y0, x1, y1, …]` (Gauss's area formula), counter-
+ * clockwise positive. Coordinates are taken relative to the first vertex: with projected
+ * coordinates in the millions, the absolute products would cancel away the area's last digits.
+ */
 export function flatRingArea(flat: ArrayLike<number>): number {
   const n = flat.length;
   if (n < 6) return 0;
+  const ox = flat[0]!;
+  const oy = flat[1]!;
   let s = 0;
-  let px = flat[n - 2]!;
-  let py = flat[n - 1]!;
+  let px = flat[n - 2]! - ox;
+  let py = flat[n - 1]! - oy;
   for (let i = 0; i < n; i += 2) {
-    const x = flat[i]!;
-    const y = flat[i + 1]!;
+    const x = flat[i]! - ox;
+    const y = flat[i + 1]! - oy;
     s += px * y - x * py;
     px = x;
     py = y;

@@ -32,5 +32,8 @@ export const JOINT_ANGLE_RAD = 1e-8;
 /** Default length of corridor pieces, in corridor widths (wL + wR): short pieces keep bounding-box candidates few. */
 export const PIECE_LENGTH_IN_WIDTHS = 2;
 
+/** …but never shorter than this (units), so a narrow corridor is not cut into hundreds of pieces. */
+export const MIN_PIECE_LENGTH = 50;
+
 /** Largest central angle of one annular slice: 90°, so a triangle from the centre can contain it. */
 export const MAX_SLICE_RAD = Math.PI / 2;

@@ -82,7 +82,7 @@ export interface Corridor {
 
 /** Options of `buildCorridor`. */
 export interface BuildCorridorOptions {
-  /** Longest piece along the centreline, working units. Default `PIECE_LENGTH_IN_WIDTHS` × (wL + wR). */
+  /** Longest piece along the centreline, working units. Default max(50, `PIECE_LENGTH_IN_WIDTHS` × (wL + wR)). */
   pieceLength?: number;
   /** Largest distance from a tapered curve's spiral edge to its slices, working units. Default 0.5 mm. */
   spiralTolerance?: number;
