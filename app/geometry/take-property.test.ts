@@ -20,8 +20,10 @@ const caseArb = fc.record({
   cuts: fc.array(fc.integer({ min: 0, max: 4 }), { minLength: 169, maxLength: 169 }),
 });
 
+type Case = typeof caseArb extends fc.Arbitrary<infer T> ? T : never;
+
 /** PIs from legs: curves only where their tangents fit in half of each neighbouring leg and clear the widths. */
-function alignmentOf(c: fc.RecordValue<typeof caseArb>): AlignmentInput {
+function alignmentOf(c: Case): AlignmentInput {
   const [x0, y0] = c.origin;
   const points: AlignmentInput["points"] = [{ x: x0, y: y0 }];
   let heading = 0;
