@@ -14,7 +14,7 @@ export { readGeoPackage } from "./readers/geopackage.server";
 export { CRS_ENTRIES, findCrsByCode, parseEpsgCode, searchCrs } from "./crs/epsg-list";
 export type { CrsEntry } from "./crs/crs-entry";
 export { isProjected, resolveCrs, type ResolvedCrs } from "./crs/resolve-crs";
-export { reproject, reprojectPoint } from "./crs/reproject";
+export { pointConverter, reproject, reprojectPoint } from "./crs/reproject";
 export { utmZoneFor } from "./crs/utm-zone";
 export { METRES_PER_UNIT, convertArea, convertLength, type LengthUnit } from "./crs/units";
 export { polygonArea, ringArea } from "./geometry/area";

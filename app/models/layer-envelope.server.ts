@@ -1,6 +1,6 @@
 import { and, gte, lte, sql } from "drizzle-orm";
 import { buildings, parcels } from "~/db/schema";
-import { findCrsByCode, parseEpsgCode, reprojectPoint } from "~/fabric/index.server";
+import { findCrsByCode, parseEpsgCode, pointConverter } from "~/fabric/index.server";
 import type { Layer } from "./layers.server";
 
 export type Bbox = [number, number, number, number];
@@ -19,12 +19,13 @@ export function workingProj4(project: { crs: string | null }): string | undefine
  */
 export function envelopeInWorking(b: Bbox, working: string): Bbox {
   const out: Bbox = [Infinity, Infinity, -Infinity, -Infinity];
+  const toWorking = pointConverter(WGS84, working);
   for (let i = 0; i <= 16; i++) {
     const t = i / 16;
     const lon = b[0] + (b[2] - b[0]) * t;
     const lat = b[1] + (b[3] - b[1]) * t;
     for (const p of [[lon, b[1]], [lon, b[3]], [b[0], lat], [b[2], lat]]) {
-      const [x, y] = reprojectPoint(p, WGS84, working);
+      const [x, y] = toWorking(p);
       out[0] = Math.min(out[0], x!); out[1] = Math.min(out[1], y!); out[2] = Math.max(out[2], x!); out[3] = Math.max(out[3], y!);
     }
   }

@@ -1,7 +1,7 @@
 import { and, eq, inArray, type SQL } from "drizzle-orm";
 import type { Feature, FeatureCollection } from "geojson";
 import { buildings, parcels } from "~/db/schema";
-import { reprojectPoint, worldXY, type AreaGeometry, type OverviewItem, type OverviewProperties } from "~/fabric/index.server";
+import { pointConverter, worldXY, type AreaGeometry, type OverviewItem, type OverviewProperties } from "~/fabric/index.server";
 import type { Db } from "~/utils/db.server";
 import { envelopeInWorking, layerRowsInBox, WGS84, type Bbox } from "./layer-envelope.server";
 import type { Layer } from "./layers.server";
@@ -45,21 +45,21 @@ export function tileFeaturesById(layer: Layer, ids: number[], tx: Db): FeatureCo
 }
 
 /**
- * Every feature of a layer as an overview item: its stored working-CRS bounds, corners taken
- * to Web Mercator through WGS84 (a parcel's few-degree grid rotation makes this box a little
- * loose, which only shifts which 4-px cell it is counted in), with area, land use and value.
+ * Every feature of a layer as an overview item: its stored working-CRS bounds, two opposite
+ * corners taken to Web Mercator through WGS84. In a conformal working CRS the grid turns by a
+ * few degrees at most against Mercator, so this box is off by a few percent of the parcel's
+ * size: it only decides which 4-px cell a small parcel is counted in, or whether it is drawn whole.
  */
 export function overviewItems(layer: Layer, working: string | undefined, tx: Db): OverviewItem[] {
   const rows: ({ id: number; minX: number; minY: number; maxX: number; maxY: number } & Record<string, string | number | null>)[] = layer.kind === "parcels"
     ? tx.select({ id: parcels.id, minX: parcels.minX, minY: parcels.minY, maxX: parcels.maxX, maxY: parcels.maxY, area: parcels.area, landUse: parcels.landUse, landValue: parcels.landValue }).from(parcels).where(eq(parcels.layerId, layer.id)).all()
     : tx.select({ id: buildings.id, minX: buildings.minX, minY: buildings.minY, maxX: buildings.maxX, maxY: buildings.maxY, area: buildings.area }).from(buildings).where(eq(buildings.layerId, layer.id)).all();
+  const toWgs84 = working ? pointConverter(working, WGS84) : (p: number[]) => p;
   return rows.map(({ id, minX, minY, maxX, maxY, ...props }) => {
-    let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
-    for (const corner of [[minX, minY], [maxX, minY], [maxX, maxY], [minX, maxY]]) {
-      const [lon, lat] = working ? reprojectPoint(corner, working, WGS84) : corner;
-      const [x, y] = worldXY(lon!, lat!);
-      x0 = Math.min(x0, x); y0 = Math.min(y0, y); x1 = Math.max(x1, x); y1 = Math.max(y1, y);
-    }
-    return { id, x0, y0, x1, y1, properties: withoutNulls(props) };
+    const [ax, ay] = toWgs84([minX, minY]);
+    const [bx, by] = toWgs84([maxX, maxY]);
+    const [x0, y1] = worldXY(ax!, ay!);
+    const [x1, y0] = worldXY(bx!, by!);
+    return { id, x0: Math.min(x0, x1), y0: Math.min(y0, y1), x1: Math.max(x0, x1), y1: Math.max(y0, y1), properties: withoutNulls(props) };
   });
 }

@@ -1,7 +1,7 @@
 import { expect, test } from "vitest";
 import type { Polygon } from "geojson";
 import { cs2cs } from "../test-support/reference-tools.server";
-import { reproject, reprojectPoint } from "./reproject";
+import { pointConverter, reproject, reprojectPoint } from "./reproject";
 import { resolveCrs } from "./resolve-crs";
 import { signedDoubleArea } from "../geometry/ring-orientation";
 
@@ -73,4 +73,13 @@ test("shipped EPSG codes can be named directly", () => {
 
 test("a point outside the projection's domain raises reprojection_failed, not NaN coordinates", () => {
   expect(() => reprojectPoint([0, 90], def(4326), def(3857))).toThrow(/cannot be converted/);
+});
+
+test("a point converter gives what reprojectPoint gives, and PROJ's cs2cs agrees within 1 mm", () => {
+  const toUtm = pointConverter(def(4326), def(32611));
+  const ours = LA.map((p) => toUtm(p));
+  expect(ours).toEqual(LA.map((p) => reprojectPoint(p, def(4326), def(32611))));
+  // Reference: PROJ cs2cs, EPSG:4326 in lat,lon order.
+  expect(maxDiff(ours, cs2cs(4326, 32611, LA.map(([lon, lat]) => [lat, lon])))).toBeLessThan(0.001);
+  expect(pointConverter(def(32611), def(32611))([1, 2, 3])).toEqual([1, 2]);
 });

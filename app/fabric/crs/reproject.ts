@@ -48,17 +48,34 @@ function convertPosition(c: Converter, p: Position): Position {
  * `reprojection_failed` for points the projection cannot take.
  */
 export function reproject<G extends AreaGeometry>(geometry: G, from: string, to: string): G {
-  if (from === to) return geometry;
+  return geometryConverter(from, to)(geometry);
+}
+
+/** `reproject` between two fixed definitions, with the converter looked up once for many geometries. */
+export function geometryConverter(from: string, to: string): <G extends AreaGeometry>(geometry: G) => G {
+  if (from === to) return (geometry) => geometry;
   const c = converterFor(from, to);
   const ring = (r: Position[]) => r.map((p) => convertPosition(c, p));
-  const out =
-    geometry.type === "Polygon"
-      ? { ...geometry, coordinates: geometry.coordinates.map(ring) }
-      : { ...geometry, coordinates: geometry.coordinates.map((part) => part.map(ring)) };
-  return normalizeOrientation(out as G);
+  return <G extends AreaGeometry>(geometry: G): G => {
+    const out =
+      geometry.type === "Polygon"
+        ? { ...geometry, coordinates: geometry.coordinates.map(ring) }
+        : { ...geometry, coordinates: geometry.coordinates.map((part) => part.map(ring)) };
+    return normalizeOrientation(out as G);
+  };
 }
 
 /** Converts one [x, y] point between proj4 definitions (same rules as reproject). */
 export function reprojectPoint(point: Position, from: string, to: string): Position {
   return from === to ? [point[0]!, point[1]!] : convertPosition(converterFor(from, to), point);
+}
+
+/**
+ * A converter of [x, y] points between two proj4 definitions (same rules as reproject), looked
+ * up once: for many points, cheaper than reprojectPoint's per-call lookup by definition text.
+ */
+export function pointConverter(from: string, to: string): (point: Position) => Position {
+  if (from === to) return (p) => [p[0]!, p[1]!];
+  const c = converterFor(from, to);
+  return (p) => convertPosition(c, p);
 }

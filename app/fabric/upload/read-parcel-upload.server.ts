@@ -9,7 +9,7 @@ import { readGeoJson } from "../readers/geojson";
 import { readGeoPackage } from "../readers/geopackage.server";
 import { applyFieldMapping, type MappedAttributes } from "../attributes/apply-mapping";
 import { findCrsByCode } from "../crs/epsg-list";
-import { reproject } from "../crs/reproject";
+import { geometryConverter } from "../crs/reproject";
 import type { ResolvedCrs } from "../crs/resolve-crs";
 import { convertArea, type LengthUnit } from "../crs/units";
 import { polygonArea } from "../geometry/area";
@@ -40,8 +40,8 @@ function areaOfUseWarning(crs: ResolvedCrs, bbox: [number, number, number, numbe
   return inside ? null : `The parcels lie at ${lat.toFixed(4)}°, ${lon.toFixed(4)}°, outside the area where ${crs.name} is used; check the source CRS.`;
 }
 
-function toUploaded(f: AreaFeature, attrs: MappedAttributes, wgs84: AreaFeature["geometry"], source: ResolvedCrs, working: ResolvedCrs, unit: LengthUnit): UploadedFeature {
-  const geometry = reproject(f.geometry, source.proj4, working.proj4);
+function toUploaded(f: AreaFeature, attrs: MappedAttributes, wgs84: AreaFeature["geometry"], toWorking: ReturnType<typeof geometryConverter>, working: ResolvedCrs, unit: LengthUnit): UploadedFeature {
+  const geometry = toWorking(f.geometry);
   const out: UploadedFeature = {
     ...attrs,
     sourceRow: f.sourceRow,
@@ -70,13 +70,15 @@ export async function readParcelUpload(input: ParcelUploadInput): Promise<Parcel
   const mapping = chooseMapping(read.features, read.fieldNames, input.kind, input.fields);
   const { mapped, rejected } = applyFieldMapping(read.features, mapping, { kind: input.kind, landValueBasis: input.landValueBasis ?? "total" });
   if (mapped.length === 0) refuseEmpty({ ...read, features: [], rejected: [...read.rejected, ...rejected] }, input.kind);
-  const wgs84 = mapped.map((m) => reproject(m.feature.geometry, sourceCrs.proj4, WGS84));
+  const toWgs84 = geometryConverter(sourceCrs.proj4, WGS84);
+  const wgs84 = mapped.map((m) => toWgs84(m.feature.geometry));
   const bbox = bboxOf(wgs84)!;
   const aou = areaOfUseWarning(sourceCrs, bbox);
   if (aou) warnings.push(aou);
   const workingCrs = chooseWorkingCrs(input.workingCrs, bbox);
   const areaUnit = input.areaUnit ?? workingCrs.unit!;
-  const features = mapped.map((m, i) => toUploaded(m.feature, m.attributes, wgs84[i]!, sourceCrs, workingCrs, areaUnit));
+  const toWorking = geometryConverter(sourceCrs.proj4, workingCrs.proj4);
+  const features = mapped.map((m, i) => toUploaded(m.feature, m.attributes, wgs84[i]!, toWorking, workingCrs, areaUnit));
   return {
     format, features, featureCount: features.length,
     rejected: [...read.rejected, ...rejected].sort((a, b) => a.row - b.row),
