@@ -1,9 +1,12 @@
-import { afterAll, beforeAll, expect, test } from "vitest";
+import { afterAll, beforeAll, expect, test, vi } from "vitest";
 import type { Browser } from "playwright-core";
 import { formatNumber } from "~/components/alternatives/format";
 import { launchBrowser, newPage, signIn } from "./support/browser";
 import { countDifferentPixels } from "./support/pixels";
 import { listDemoAlternatives, plannerCookie, readAlternative, shownNumber, waitForEditor, waitForPreview, waitForSaved } from "./alternative-helpers";
+
+// Map journeys draw with software WebGL and wait for live previews: on a busy machine one can pass a minute.
+vi.setConfig({ testTimeout: 180_000 });
 
 let browser: Browser;
 beforeAll(async () => {
@@ -166,5 +169,57 @@ test("a manager sees the same alternative read only", async () => {
   await expect(page.getByRole("button", { name: "Undo" }).count()).resolves.toBe(0);
   await expect(page.getByTestId("total-takeArea").textContent()).resolves.toContain(formatNumber(target.summary.takeArea, 1));
   await expect(page.getByTestId("curve-elements").locator("tbody tr").count()).resolves.toBeGreaterThan(0);
+  await page.context().close();
+});
+
+test("a radius whose tangents overrun the leg shows the engine's message by the table, keeps the last good totals, and is not saved", async () => {
+  const cookie = await plannerCookie();
+  const target = (await listDemoAlternatives(cookie))[2]!;
+  const page = await newPage(browser);
+  await signIn(page, "planner@demo.test", "takeline-demo");
+  await page.goto(`/projects/${target.projectId}/alternatives/${target.id}`);
+  await waitForEditor(page);
+  const takeBefore = await page.getByTestId("total-takeArea").textContent();
+  const radius = page.getByLabel("PI 1 radius", { exact: true });
+  await radius.fill("50000");
+  await radius.press("Enter");
+  const error = page.getByTestId("geometry-error");
+  await error.waitFor();
+  // T = R·tan(Δ/2) (Schofield & Breach §10.1) far exceeds the leg: the engine names both lengths.
+  await expect(error.textContent()).resolves.toMatch(/PI 1 needs [\d.]+ of tangent/);
+  await expect(page.getByTestId("total-takeArea").textContent()).resolves.toBe(takeBefore);
+  await page.getByTestId("save-status").filter({ hasText: "Not saved" }).waitFor({ timeout: 20_000 });
+  expect((await readAlternative(target.id, cookie)).version).toBe(target.version);
+  // Ctrl+Z outside a text field undoes the edit (inside one, the browser's own undo applies).
+  await page.locator("h1").click();
+  await page.keyboard.press("Control+Z");
+  await error.waitFor({ state: "detached" });
+  await waitForSaved(page, target.version);
+  await page.context().close();
+});
+
+test("a design-check warning is accepted with a reason, which is saved with the alternative", async () => {
+  const cookie = await plannerCookie();
+  const target = (await listDemoAlternatives(cookie))[0]!;
+  const page = await newPage(browser);
+  await signIn(page, "planner@demo.test", "takeline-demo");
+  await page.goto(`/projects/${target.projectId}/alternatives/${target.id}`);
+  await waitForEditor(page);
+  const checks = page.getByTestId("design-checks");
+  const warningsBefore = await checks.getByRole("button", { name: "Accept with a reason…" }).count();
+  // 150 m is below the minimum radius for 80 km/h at emax 8 % (AASHTO Green Book 2018, Table 3-7: 229 m, from memory of the rounded table value).
+  const radius = page.getByLabel("PI 1 radius", { exact: true });
+  await radius.fill("150");
+  await radius.press("Enter");
+  const warning = checks.locator("li").filter({ hasText: /PI 1: radius 150 is below the minimum/ });
+  await warning.waitFor({ timeout: 20_000 });
+  await expect(warning.textContent()).resolves.toContain("Source: AASHTO");
+  await warning.getByRole("button", { name: "Accept with a reason…" }).click();
+  await page.getByLabel("Reason for going ahead").fill("Existing bridge abutment fixes the curve; posted advisory speed.");
+  await page.getByRole("dialog").getByRole("button", { name: "Accept" }).click();
+  await warning.getByText("accepted", { exact: true }).waitFor();
+  await expect(checks.getByRole("button", { name: "Accept with a reason…" }).count()).resolves.toBe(warningsBefore);
+  const stored = async () => ((await readAlternative(target.id, cookie)) as unknown as { acceptedChecks: { id: string; reason: string }[] }).acceptedChecks;
+  await expect.poll(stored, { timeout: 20_000 }).toEqual([{ id: "min-radius:pi-1", reason: "Existing bridge abutment fixes the curve; posted advisory speed." }]);
   await page.context().close();
 });

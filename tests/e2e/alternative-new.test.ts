@@ -1,9 +1,12 @@
-import { afterAll, beforeAll, expect, test } from "vitest";
+import { afterAll, beforeAll, expect, test, vi } from "vitest";
 import type { Browser } from "playwright-core";
 import { cs2cs } from "~/fabric/test-support/reference-tools.server";
 import { launchBrowser, newPage, signIn } from "./support/browser";
 import { get } from "./support/http";
 import { plannerCookie, readAlternative, waitForEditor } from "./alternative-helpers";
+
+// Map journeys draw with software WebGL and wait for live previews: on a busy machine one can pass a minute.
+vi.setConfig({ testTimeout: 180_000 });
 
 let browser: Browser;
 beforeAll(async () => {

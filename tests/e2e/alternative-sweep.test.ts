@@ -1,8 +1,11 @@
-import { afterAll, beforeAll, expect, test } from "vitest";
+import { afterAll, beforeAll, expect, test, vi } from "vitest";
 import type { Browser } from "playwright-core";
 import { launchBrowser, newPage, signIn } from "./support/browser";
 import { postJson } from "./support/http";
 import { listDemoAlternatives, plannerCookie, readAlternative, waitForEditor, waitForSaved } from "./alternative-helpers";
+
+// Map journeys draw with software WebGL and wait for live previews: on a busy machine one can pass a minute.
+vi.setConfig({ testTimeout: 180_000 });
 
 let browser: Browser;
 beforeAll(async () => {
@@ -37,7 +40,8 @@ test("the curve trade-off sweeps a PI's radius, charts the same steps the API co
   const res = await postJson(`/api/v1/alternatives/${target.id}/sweep`, { pointIndex: 1, vary: "radius", from, to, steps: 12 }, { cookie });
   expect(res.status).toBe(200);
   const api = (await res.json()) as { steps: Step[]; minimumRadius: number | null };
-  const failing = api.steps.filter((s) => s.error || s.checks?.status === "warnings").length;
+  // A step fails where it does not compute or any design check is unmet (accepted warnings included).
+  const failing = api.steps.filter((s) => s.error || (s.checks && s.checks.status !== "pass")).length;
   for (let i = 0; i < 4; i++) {
     const chart = charts.nth(i);
     await expect(chart.locator("[data-failing]").count()).resolves.toBe(12);
@@ -50,7 +54,7 @@ test("the curve trade-off sweeps a PI's radius, charts the same steps the API co
   expect(failing).toBeGreaterThan(0);
 
   // Apply the largest radius that computes and meets the checks, from the take-area chart.
-  const passing = api.steps.filter((s) => !s.error && s.checks?.status !== "warnings");
+  const passing = api.steps.filter((s) => !s.error && s.checks?.status === "pass");
   const chosen = passing[passing.length - 1]!;
   const points = charts.first().locator('[role="button"][data-failing="false"]');
   await points.nth((await points.count()) - 1).click();

@@ -62,7 +62,7 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
     <div className="space-y-6">
       <EditorHeader alternative={alternative} projectId={projectId} projectName={projectName} editable={editable} editor={editor} save={autosave.state} onRetry={() => void autosave.flush()} />
       <EstimateNotice />
-      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Card title="Map">
           <AlternativeEditorMap layers={layers} basemapStyleUrl={basemapStyleUrl} metric={units === "m"} crs={crs} points={points} overlay={overlay} colour={alternative.colour}
             editable={editable} selected={selected} onSelect={setSelected}
@@ -75,7 +75,7 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
       <Card title="Points of intersection">
         <PiTable alignment={editor.draft.alignment} curves={result?.geometry.curves ?? []} selected={selected} editable={editable} error={preview.error} actions={tableActions} />
       </Card>
-      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <Card title="Computed elements">
           {result ? <CurveElements curves={result.geometry.curves} stations={result.geometry.stations} length={result.geometry.length} unit={lengthUnitLabel(units)} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>

@@ -24,6 +24,9 @@ test("value axes start at zero for counts and areas, and ignore missing steps", 
   expect(valueExtent([10, 20, Number.NaN])).toEqual([0, 21]);
   expect(valueExtent([])).toEqual([0, 1]);
   expect(valueExtent([0, 0])).toEqual([0, 1]);
+  // Around the data for a sweep: 100…200 padded by 5 % of the spread either side.
+  expect(valueExtent([100, 200, 150], false)).toEqual([95, 205]);
+  expect(valueExtent([40, 40], false)).toEqual([38, 42]);
   expect(shortNumber(12_500)).toBe("12.5k");
   expect(shortNumber(3_400_000)).toBe("3.4M");
 });

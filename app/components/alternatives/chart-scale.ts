@@ -24,14 +24,18 @@ export function niceTicks(min: number, max: number, count = 5): number[] {
   return ticks;
 }
 
-/** The range a chart's value axis spans: from zero when all values are positive, padded by 5 %. */
+/**
+ * The range a value axis spans, padded by 5 %: from zero for bar lengths; around the data for a
+ * sweep, so that small differences between steps show (the tick labels give the true values).
+ */
 export function valueExtent(values: number[], fromZero = true): [number, number] {
   const finite = values.filter(Number.isFinite);
   if (finite.length === 0) return [0, 1];
   const lo = Math.min(...finite, ...(fromZero ? [0] : []));
   const hi = Math.max(...finite);
-  if (hi === lo) return [lo, lo === 0 ? 1 : lo * 1.1];
-  return [lo, hi + (hi - lo) * 0.05];
+  if (hi === lo) return fromZero || lo === 0 ? [Math.min(0, lo), lo === 0 ? 1 : Math.abs(lo) * 1.1] : [lo - Math.abs(lo) * 0.05, hi + Math.abs(hi) * 0.05];
+  const pad = (hi - lo) * 0.05;
+  return [fromZero ? lo : lo - pad, hi + pad];
 }
 
 /** Short tick labels: 12 500 → "12.5k", 3 400 000 → "3.4M". */

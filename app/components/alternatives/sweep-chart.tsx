@@ -22,7 +22,7 @@ const PAD = { left: 46, right: 12, top: 14, bottom: 36 };
 export function SweepChart({ title, xLabel, points, marker, onPick }: { title: string; xLabel: string; points: SweepPoint[]; marker?: { x: number; label: string } | null; onPick?: (value: number) => void }) {
   const xs = points.map((p) => p.value);
   const domainX: [number, number] = [Math.min(...xs), Math.max(...xs)];
-  const domainY = valueExtent(points.flatMap((p) => (p.y === null ? [] : [p.y])));
+  const domainY = valueExtent(points.flatMap((p) => (p.y === null ? [] : [p.y])), false);
   const sx = linearScale(domainX, [PAD.left, W - PAD.right]);
   const sy = linearScale(domainY, [H - PAD.bottom, PAD.top]);
   const drawn = points.filter((p) => p.y !== null);
@@ -46,7 +46,7 @@ export function SweepChart({ title, xLabel, points, marker, onPick }: { title: s
         {markerInside && (
           <g data-testid="minimum-radius-line">
             <line x1={sx(marker.x)} x2={sx(marker.x)} y1={PAD.top} y2={H - PAD.bottom} stroke="#a12a2a" strokeWidth={1.4} strokeDasharray="4 3" />
-            <text x={sx(marker.x) + 3} y={PAD.top + 8} fontSize={9} fill="#a12a2a">{marker.label}</text>
+            <text x={sx(marker.x) + 3} y={H - PAD.bottom - 4} fontSize={9} fill="#a12a2a">{marker.label}</text>
           </g>
         )}
         <path d={path} fill="none" stroke="#22594a" strokeWidth={1.6} />

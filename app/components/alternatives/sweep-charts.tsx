@@ -10,7 +10,8 @@ const METRICS: { key: keyof Pick<SweepStep, "takeArea" | "estimatedCost" | "parc
   { key: "displacements", title: "Buildings displaced" },
 ];
 
-const failing = (s: SweepStep) => s.checks?.status === "warnings";
+/** A step where any design check is unmet — accepted or not: the chart shows what the rule says. */
+const failing = (s: SweepStep) => s.checks !== null && s.checks.status !== "pass";
 
 /** The four trade-off charts of a sweep, and the same figures as a table for reading exactly. */
 export function SweepCharts({ result, vary, unit, lengthUnit, onPick }: { result: SweepResult; vary: SweepVariable; unit: string; lengthUnit: string; onPick?: (value: number) => void }) {
@@ -22,7 +23,7 @@ export function SweepCharts({ result, vary, unit, lengthUnit, onPick }: { result
     <div className="space-y-3">
       <p className="text-xs text-ink-soft">
         {onPick ? "Click a point (or focus it and press Enter) to apply its value to the PI. " : ""}
-        Hollow diamonds: design checks warn at that value. Crosses: the alignment does not compute there.{marker ? " Dashed line: minimum radius for the design speed and emax." : ""}
+        Hollow diamonds: a design check is not met at that value (even where a warning was accepted). Crosses: the alignment does not compute there.{marker ? " Dashed line: minimum radius for the design speed and emax." : ""}
       </p>
       <div className="grid gap-4 sm:grid-cols-2">
         {METRICS.map((m) => {

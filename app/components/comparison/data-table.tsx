@@ -35,8 +35,8 @@ export function DataTable<Row>({ table, label, testId, rowClass }: { table: Tabl
           {table.getRowModel().rows.map((r) => (
             <tr key={r.id} className={`border-b border-rule last:border-0 hover:bg-paper/60 ${rowClass?.(r.original) ?? ""}`}>
               {r.getVisibleCells().map((c) => {
-                const numeric = (c.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
-                return <td key={c.id} className={`px-2 py-1.5 ${numeric ? "text-right tabular-nums" : ""}`}>{flexRender(c.column.columnDef.cell, c.getContext())}</td>;
+                const meta = c.column.columnDef.meta as { numeric?: boolean; nowrap?: boolean } | undefined;
+                return <td key={c.id} className={`px-2 py-1.5 ${meta?.numeric ? "text-right tabular-nums whitespace-nowrap" : ""} ${meta?.nowrap ? "whitespace-nowrap" : ""}`}>{flexRender(c.column.columnDef.cell, c.getContext())}</td>;
               })}
             </tr>
           ))}

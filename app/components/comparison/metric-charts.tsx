@@ -1,4 +1,5 @@
-import { formatCost, formatNumber } from "~/components/alternatives/format";
+import { shortNumber } from "~/components/alternatives/chart-scale";
+import { formatNumber } from "~/components/alternatives/format";
 import type { AlternativeSummary } from "~/components/alternatives/api-types";
 import type { ComparisonAlternative } from "./comparison-types";
 import { MetricBarChart } from "./metric-bar-chart";
@@ -11,7 +12,7 @@ export function MetricCharts({ alternatives, lengthUnit, areaUnit }: { alternati
     { key: "parcelsAffected", title: "Parcels affected", format: (v) => String(v) },
     { key: "fullTakes", title: "Full takes", format: (v) => String(v) },
     { key: "displacements", title: "Displacements", format: (v) => String(v) },
-    { key: "estimatedCost", title: "Cost estimate (order of magnitude)", format: formatCost },
+    { key: "estimatedCost", title: "Cost estimate (order of magnitude)", format: (v) => `≈ ${shortNumber(v)}` },
   ];
   return (
     <div className="grid gap-5 sm:grid-cols-2 lg:grid-cols-3">

@@ -10,7 +10,7 @@ const numeric = { numeric: true };
 
 function buildColumns(alternatives: ComparisonAlternative[], areaUnit: string) {
   return [
-    col.accessor("parcelId", { header: "Parcel" }),
+    col.accessor("parcelId", { header: "Parcel", meta: { nowrap: true } }),
     col.accessor((r) => r.owner ?? "", { id: "owner", header: "Owner" }),
     col.accessor((r) => r.address ?? "", { id: "address", header: "Address" }),
     col.accessor("parcelArea", { header: `Parcel area (${areaUnit})`, meta: numeric, cell: (c) => formatNumber(c.getValue(), 0) }),
