@@ -25,6 +25,21 @@ export function findSampledZeros(f: ScalarFn, xs: readonly number[], fs: readonl
   return zeros;
 }
 
+/**
+ * Every zero of a periodic `f` (period `period`) from samples at increasing `ts` in
+ * [0, period). The loop is cut at the sample of largest |f|, which can be neither a zero nor
+ * the bottom of a dip, so nothing is lost at the cut. Zeros are returned in [0, period).
+ */
+export function findCyclicZeros(f: ScalarFn, ts: readonly number[], fs: readonly number[], period: number, touch = 0): number[] {
+  let best = 0;
+  for (let k = 1; k < ts.length; k++) if (Math.abs(fs[k]!) > Math.abs(fs[best]!)) best = k;
+  const shift = ts[best]!;
+  const order = [...ts.slice(best), ...ts.slice(0, best)].map((t) => (t - shift + period) % period);
+  const values = [...fs.slice(best), ...fs.slice(0, best)];
+  const shifted: ScalarFn = (t) => f((t + shift) % period);
+  return findSampledZeros(shifted, [...order, period], [...values, fs[best]!], touch).map((t) => (t + shift) % period);
+}
+
 function isSameSignDip(a: number, b: number, c: number): boolean {
   return a * b > 0 && b * c > 0 && Math.abs(b) < Math.abs(a) && Math.abs(b) <= Math.abs(c);
 }
