@@ -5,29 +5,37 @@ import type { CompoundState } from "./compound-state";
 import { runLevenbergMarquardt, sumSquares } from "./levenberg-marquardt";
 import { SOLVER_RESIDUAL_TOL } from "./tolerances";
 import { predictTwinStart } from "./compound-twin";
+import { sweepTwoFreeAngles } from "./compound-sweep";
 
 export type { CompoundParams } from "./compound-reduction";
 
 const MAX_ITERATIONS = 40;
 // Loose on purpose: the full Newton polish and the forward verification are the real gates.
 const ACCEPT_RESIDUAL = 1e-7;
-// 36 per axis in 2-D: at 28 about one draw in 300 of the 2-D sets lost a root whose basin fell
-// between grid points at large angles (measured over 20 000 draws; 36 leaves about 1 in 2500).
+// 36 per axis in 2-D (only a fallback now: every independent two-angle set goes to
+// compound-sweep.ts first); this grid lost about one twin root in 2500 draws.
 const GRID_POINTS = [0, 160, 36, 10] as const;
 const MAX_STARTS = 10;
 const LM_OPTIONS = { maxIterations: MAX_ITERATIONS, residualTol: SOLVER_RESIDUAL_TOL, acceptResidual: ACCEPT_RESIDUAL };
 
 /**
- * Numerical solve for what the closed forms left open: scan the free coordinates on a grid, keep
- * the grid's local minima of the squared residual as starts, and polish each by damped
- * Gauss–Newton (Levenberg–Marquardt) with a forward-difference Jacobian; in 2-D also from each
- * root's predicted twin (compound-twin.ts). Returns converged roots
- * (not yet verified against the knowns; the caller does that).
+ * Numerical solve for what the closed forms left open. Two free angles: the exact one-variable
+ * or contour search of compound-sweep.ts, which finds every root deterministically. Otherwise
+ * (one free angle, or a two-angle set the sweep does not cover): scan the free coordinates on a
+ * grid, keep the grid's local minima of the squared residual as starts, and polish each by
+ * damped Gauss–Newton (Levenberg–Marquardt) with a forward-difference Jacobian; in 2-D also from
+ * each root's predicted twin (compound-twin.ts). Returns converged roots (not yet verified
+ * against the knowns; the caller does that).
  */
 export function solveCompoundNumerically(knowns: Known[], seed: CompoundState): CompoundParams[] {
   const red = buildReduction(seed, knowns);
   const dims = red.bounds.length;
   if (dims === 0) return red.solveFixedAngles();
+  if (dims === 2) {
+    // Every independent two-angle set has a sweep; the grid below stays as a safety net.
+    const swept = sweepTwoFreeAngles(knowns);
+    if (swept) return swept;
+  }
   const roots: CompoundParams[] = [];
   const found: number[][] = [];
   const cell = red.bounds.map(([lo, hi]) => (hi - lo) / GRID_POINTS[Math.min(dims, 3)]!);

@@ -2,7 +2,7 @@ import { expect, test } from "vitest";
 import { computeCompoundCurve } from "./compound-curve";
 import { solveCompoundCurve } from "./compound-solver";
 import { GeometryInputError } from "./errors";
-import { sameCurve } from "./compound-test-support";
+import { reproduces, sameCurve } from "./compound-test-support";
 
 // Check value 6 curve (board-exam worked example, secondary; closed form cross-check):
 // R1 400 / Δ1 36°, R2 300 / Δ2 50°, T_PC 337.198, T_PT 298.899.
@@ -55,7 +55,8 @@ test("the parallel condition means the long chord turns by Δ1 from the back tan
 });
 
 test("a set with two solutions returns both, and each reproduces the knowns", () => {
-  // {R2, T_PT, L1, φ_PT} of R1 600/45°, R2 400/20° (check value 7 curve) has a second root nearby.
+  // {R2, T_PT, L1, φ_PT} of R1 600/45°, R2 400/20° (check value 7 curve) has a second root nearby
+  // (Δ1 ≈ 45.04°). 45° is a round angle, where a search grid could put a sample right on the root.
   const c = computeCompoundCurve({ radius1: 600, radius2: 400, delta1: 45, delta2: 20 });
   const given = { radius2: 400, tangentPT: c.tangentPT, length1: c.length1, chordAnglePT: c.chordAnglePT };
   const { solutions } = solveCompoundCurve(given);
@@ -132,4 +133,34 @@ test("equal radii leave the split of Δ open, so the set is refused rather than 
       expect((e as GeometryInputError).code).toBe("missing_knowns");
     }
   }
+});
+
+test("a two-angle search with twin roots returns both: {R1, T_PT, t2, LC} of R1 20/74.51°, R2 33.12/5°", () => {
+  // The property-test draw (seed 12) that the grid search used to lose. Both curves are checked
+  // forwards (vertex triangle, Schofield & Breach §10.3) against every given value.
+  const c = computeCompoundCurve({ radius1: 20, radius2: 33.117061601086434, delta1: 74.51338860244462, delta2: 5.000000000000009 });
+  const given = { radius1: 20, tangentPT: c.tangentPT, subTangent2: c.subTangent2, longChord: c.longChord };
+  const { solutions } = solveCompoundCurve(given);
+  expect(solutions).toHaveLength(2);
+  expect(solutions.some((s) => sameCurve(s, 20, 33.117061601086434, 74.51338860244462, 5.000000000000009))).toBe(true);
+  for (const s of solutions) expect(reproduces(s, given)).toBe(true);
+  const other = solutions.find((s) => !sameCurve(s, 20, 33.117061601086434, 74.51338860244462, 5.000000000000009))!;
+  const again = computeCompoundCurve({ radius1: other.radius1, radius2: other.radius2, delta1: other.delta1, delta2: other.delta2 });
+  expect(again.subTangent2 / given.subTangent2).toBeCloseTo(1, 9);
+  expect(again.longChord / given.longChord).toBeCloseTo(1, 9);
+});
+
+
+test("both arcs known only by length: {T_PC, L1, L2, LC} returns twin curves 0.7° apart", () => {
+  // A property-test draw: R1 1098.6942/30.453304°, R2 731.0415/84.679875° has a twin near
+  // Δ1 29.76°, Δ2 85.14°. Each curve is checked forwards against every given value.
+  const c = computeCompoundCurve({ radius1: 1098.6942, radius2: 731.0415, delta1: 30.453304, delta2: 84.679875 });
+  const given = { tangentPC: c.tangentPC, length1: c.length1, length2: c.length2, longChord: c.longChord };
+  const { solutions } = solveCompoundCurve(given);
+  expect(solutions).toHaveLength(2);
+  expect(solutions.some((s) => sameCurve(s, 1098.6942, 731.0415, 30.453304, 84.679875))).toBe(true);
+  for (const s of solutions) expect(reproduces(s, given)).toBe(true);
+  const twin = solutions.find((s) => !sameCurve(s, 1098.6942, 731.0415, 30.453304, 84.679875))!;
+  expect(Math.abs(twin.delta1 - 30.453304)).toBeLessThan(1);
+  expect(Math.abs(twin.delta2 - 84.679875)).toBeLessThan(1);
 });
