@@ -1,6 +1,8 @@
 import { computeCompoundCurve, type CompoundCurve } from "./compound-curve";
 import { COMPOUND_ANGLE_KEYS, COMPOUND_LENGTH_KEYS, parseCompoundGiven, type CompoundGiven } from "./compound-knowns";
+import { propagateCompound } from "./compound-propagate";
 import { selectIndependentKnowns } from "./compound-rank";
+import { stateFromKnowns } from "./compound-state";
 import { degToRad } from "./angles";
 
 /** Test helper (not part of the API): every set of four knowns the solver accepts. */
@@ -19,6 +21,13 @@ export function listIndependentSets(): KnownSet[] {
   const plain = subsets(VALUE_KEYS, 4) as KnownSet[];
   const parallel = subsets(VALUE_KEYS, 3).map((s) => [...s, "commonTangentParallelToLongChord"] as KnownSet);
   return [...plain, ...parallel].filter((set) => selectIndependentKnowns(parseCompoundGiven(givenFrom(probe, set))).rank === 4);
+}
+
+/** True when the closed forms leave both angles free for this set (a two-dimensional search). */
+export function leavesTwoFreeAngles(set: KnownSet): boolean {
+  const probe = computeCompoundCurve({ radius1: 613.7, radius2: 241.3, delta1: 41.9, delta2: 29.9 });
+  const { chosen } = selectIndependentKnowns(parseCompoundGiven(givenFrom(probe, set)));
+  return propagateCompound(stateFromKnowns(chosen)).some((s) => s.d === undefined && s.d1 === undefined && s.d2 === undefined);
 }
 
 /** The given object for a set of keys, read from a forward solution. */
