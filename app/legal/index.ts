@@ -6,3 +6,4 @@ export { computeRingArea } from "./ring-area";
 export { describeArea, formatCoordinates, formatDistance } from "./legal-format";
 export type { ArcCourse, BoundaryPart, BoundaryRing, BoundarySegment, Course, LineCourse, LineSource, RingClosure } from "./legal-types";
 export type { Commencement } from "./beginning-point";
+export { boundaryToPolygons, EXPORT_CHORD_TOLERANCE } from "./boundary-polygon";
