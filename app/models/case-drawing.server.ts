@@ -1,5 +1,5 @@
 import { and, eq } from "drizzle-orm";
-import type { LineString, MultiPolygon, Polygon, Position } from "geojson";
+import type { FeatureCollection, LineString, MultiPolygon, Polygon, Position } from "geojson";
 import { layers, parcels } from "~/db/schema";
 import { findCrsByCode, parseEpsgCode, resolveCrs } from "~/fabric/index.server";
 import { computeAlignmentGeometry } from "~/geometry/compute-alignment-geometry";
@@ -10,6 +10,7 @@ import type { PolygonCoords } from "~/geometry/take-types";
 import { METRES_PER_UNIT, type LengthUnit } from "~/geometry/units";
 import { db, type Db } from "~/utils/db.server";
 import { findAlternativeVersion } from "./alternatives.server";
+import { layerRowsInBox } from "./layer-envelope.server";
 import type { Project } from "./projects.server";
 
 /** What the parcel page draws, in the working CRS's own coordinates (the browser reprojects them). */
@@ -22,6 +23,23 @@ export interface CaseDrawing {
   parcelLayerId: number | null;
   /** [west, south, east, north] of the parcel in WGS84, to frame the map. */
   parcelBounds: [number, number, number, number] | null;
+  /**
+   * The parcel and its neighbours within {@link NEIGHBOURHOOD} (WGS84, parcel IDs only): a land agent
+   * sees the land around their parcel without being given the project's whole fabric and its owners.
+   */
+  fabric: FeatureCollection;
+}
+
+/** How far around the agent's parcel the map shows other parcels, in working-CRS units. */
+const NEIGHBOURHOOD = 150;
+const NEIGHBOURS_SHOWN = 400;
+
+const EMPTY: FeatureCollection = { type: "FeatureCollection", features: [] };
+
+function neighbourhoodOf(row: typeof parcels.$inferSelect, tx: Db): FeatureCollection {
+  const box: [number, number, number, number] = [row.minX - NEIGHBOURHOOD, row.minY - NEIGHBOURHOOD, row.maxX + NEIGHBOURHOOD, row.maxY + NEIGHBOURHOOD];
+  const near = tx.select({ parcelId: parcels.parcelId, geometry: parcels.geometryWgs84 }).from(parcels).where(layerRowsInBox(parcels, row.layerId, box)).limit(NEIGHBOURS_SHOWN).all();
+  return { type: "FeatureCollection", features: near.map((n) => ({ type: "Feature", geometry: JSON.parse(n.geometry), properties: { parcelId: n.parcelId } })) };
 }
 
 /** Project units per working-CRS unit (a US-feet project on a metre grid), as the land reader scales. */
@@ -71,7 +89,7 @@ export function readAlternativeDrawing(project: Project, alternativeId: number, 
   return c ? drawingOf(c, []) : undefined;
 }
 
-function drawingOf(c: Context, takes: CaseDrawing["takes"], parcelBounds: CaseDrawing["parcelBounds"] = null): CaseDrawing {
+function drawingOf(c: Context, takes: CaseDrawing["takes"], parcelBounds: CaseDrawing["parcelBounds"] = null, fabric = EMPTY): CaseDrawing {
   const built = buildCorridor(c.geometry.elements, c.corridorInput);
   const easement = built.easement ? easementOutline(built) : [];
   return {
@@ -82,6 +100,7 @@ function drawingOf(c: Context, takes: CaseDrawing["takes"], parcelBounds: CaseDr
     centerline: { type: "LineString", coordinates: scaled(c.geometry.centerline.coordinates as Position[], 1 / c.k) },
     parcelLayerId: c.parcelLayerId,
     parcelBounds,
+    fabric,
   };
 }
 
@@ -102,5 +121,5 @@ export function readCaseDrawing(project: Project, alternativeId: number, version
     classification,
     geometry: { type: "MultiPolygon" as const, coordinates: t.coordinates.map((p) => toCrs(p, c.k)) },
   }));
-  return drawingOf(c, takes, boundsOfWgs84(row.geometryWgs84));
+  return drawingOf(c, takes, boundsOfWgs84(row.geometryWgs84), neighbourhoodOf(row, tx));
 }

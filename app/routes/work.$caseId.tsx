@@ -11,7 +11,6 @@ import { StatusBadge } from "~/components/work/status-badge";
 import { formatStationRange } from "~/calculations/parcel-list-csv";
 import { readCaseDrawing } from "~/models/case-drawing.server";
 import { findAlternativeForUser } from "~/models/alternatives.server";
-import { listProjectLayers } from "~/models/layers.server";
 import { updateAgentCase } from "~/models/parcel-case-updates.server";
 import { findProjectForUser } from "~/models/projects.server";
 import { findAgentCase, listCaseEvents, toWorkItemJson } from "~/models/work-list.server";
@@ -44,14 +43,12 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   // The agent is a member of the project their parcel belongs to; read the project as such.
   const project = findProjectForUser(item.projectId, { id: user.id, role: "admin" })!;
   const alternative = findAlternativeForUser(item.alternativeId, { id: user.id, role: "admin" });
-  const layers = listProjectLayers(project.id).filter((l) => l.status === "active").map((l) => ({ id: l.id, kind: l.kind, name: l.name, bbox: l.bbox }));
   return {
     item,
     stationRange: formatStationRange(item, item.units),
     events: listCaseEvents(item.caseId).map((e) => ({ ...e, at: e.at.toISOString() })),
     drawing: readCaseDrawing(project, item.alternativeId, item.version, item.parcelId, item.classification) ?? null,
     colour: alternative?.colour ?? "#d9480f",
-    layers,
     basemapStyleUrl: env().BASEMAP_STYLE_URL,
   };
 }
@@ -71,7 +68,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function ParcelCasePage({ loaderData, actionData }: Route.ComponentProps) {
-  const { item, stationRange, events, drawing, colour, layers, basemapStyleUrl } = loaderData;
+  const { item, stationRange, events, drawing, colour, basemapStyleUrl } = loaderData;
   const area = areaLabel(item.units);
   const figures: [string, string][] = [
     ["Take", `${formatArea(item.takeArea)} ${area}`],
@@ -97,7 +94,7 @@ export default function ParcelCasePage({ loaderData, actionData }: Route.Compone
       <div className="grid gap-6 lg:grid-cols-3">
         <Card title="The take" className="lg:col-span-2">
           {drawing ? (
-            <ParcelCaseMap drawing={drawing} parcelId={item.parcelId} colour={colour} layers={layers} basemapStyleUrl={basemapStyleUrl} metric={item.units === "m"} />
+            <ParcelCaseMap drawing={drawing} parcelId={item.parcelId} colour={colour} basemapStyleUrl={basemapStyleUrl} metric={item.units === "m"} />
           ) : (
             <p className="text-sm text-ink-soft">No map: the project has no working coordinate system Takeline knows.</p>
           )}

@@ -1,12 +1,10 @@
 import { useMemo } from "react";
-import type { LineString, MultiPolygon, Polygon } from "geojson";
-import Map, { Layer, NavigationControl, ScaleControl } from "react-map-gl/maplibre";
+import type { FeatureCollection, LineString, MultiPolygon, Polygon } from "geojson";
+import Map, { Layer, NavigationControl, ScaleControl, Source } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
-import { FabricLayers } from "./fabric-layers";
 import { browserMapLib, markMapReady } from "./map-lib";
 import { TAKE_STYLES } from "./outline-styles";
 import { toOverlayData } from "./overlay-data";
-import type { MapLayerInfo } from "./project-map";
 import { createWorkingCrs } from "./working-crs";
 
 export interface ParcelCaseDrawing {
@@ -17,13 +15,15 @@ export interface ParcelCaseDrawing {
   centerline: LineString;
   parcelLayerId: number | null;
   parcelBounds: [number, number, number, number] | null;
+  /** The parcel and its neighbours (WGS84), drawn instead of the project's whole fabric. */
+  fabric: FeatureCollection;
 }
 
 /**
- * One parcel of a land agent's work list: the fabric, the approved alternative's right-of-way and
- * easement in its colour, this parcel's take shaded and the parcel itself outlined. Read only.
+ * One parcel of a land agent's work list: the neighbouring parcels, the approved alternative's
+ * right-of-way and easement in its colour, this parcel's take shaded and the parcel outlined. Read only.
  */
-export function ParcelCaseMap({ drawing, parcelId, colour, layers, basemapStyleUrl, metric }: { drawing: ParcelCaseDrawing; parcelId: string; colour: string; layers: MapLayerInfo[]; basemapStyleUrl: string; metric: boolean }) {
+export function ParcelCaseMap({ drawing, parcelId, colour, basemapStyleUrl, metric }: { drawing: ParcelCaseDrawing; parcelId: string; colour: string; basemapStyleUrl: string; metric: boolean }) {
   const data = useMemo(() => toOverlayData(drawing, createWorkingCrs(drawing.crsDefinition), { colour }), [drawing, colour]);
   const bounds = drawing.parcelBounds ?? undefined;
   return (
@@ -37,12 +37,12 @@ export function ParcelCaseMap({ drawing, parcelId, colour, layers, basemapStyleU
       >
         <NavigationControl position="top-left" showCompass={false} />
         <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />
-        <FabricLayers layers={layers} dim />
+        <Source id="case-fabric" type="geojson" data={drawing.fabric}>
+          <Layer id="case-fabric-fill" type="fill" paint={{ "fill-color": "#ebe7dc", "fill-opacity": 0.5 }} />
+          <Layer id="case-fabric-line" type="line" paint={{ "line-color": "#5b5446", "line-width": 0.8 }} />
+        </Source>
         <AlternativeOverlays id="case" data={data} colour={colour} />
-        {drawing.parcelLayerId !== null && (
-          <Layer id="case-parcel-outline" type="line" source={`layer-${drawing.parcelLayerId}`} source-layer="parcels" filter={["==", ["get", "parcelId"], parcelId]}
-            paint={{ "line-color": "#1e2422", "line-width": 3 }} />
-        )}
+        <Layer id="case-parcel-outline" type="line" source="case-fabric" filter={["==", ["get", "parcelId"], parcelId]} paint={{ "line-color": "#1e2422", "line-width": 3 }} />
       </Map>
       <div className="absolute bottom-8 left-3 z-10 rounded-md bg-sheet/95 p-3 text-xs shadow-sheet" aria-label="Legend">
         <ul className="space-y-0.5">
