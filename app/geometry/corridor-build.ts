@@ -57,10 +57,19 @@ function buildPieces(elements: AlignmentElement[], input: CorridorInput, options
   const joints = computeJoints(elements, profile);
   const pieces: CorridorPiece[] = [];
   elements.forEach((el, i) => {
-    const made = el.type === "tangent" ? buildTangentPieces(el, i, joints[i]!, joints[i + 1]!, profile, options.pieceLength) : buildArcPieces(el, i, profile, options.pieceLength, options.spiralTolerance);
+    const made = el.type === "tangent" ? buildTangentPieces(el, i, joints[i]!, joints[i + 1]!, profile, options.pieceLength, lineAzimuth(elements, i)) : buildArcPieces(el, i, profile, options.pieceLength, options.spiralTolerance);
     for (const p of made) pieces.push({ ...p, index: pieces.length });
   });
   return { pieces, area: sumAreas(pieces), stationFrom: elements[0]!.startStation, stationTo: elements[elements.length - 1]!.endStation };
+}
+
+/** A tangent's direction from a neighbouring arc when there is one (its start azimuth is the leg's own heading). */
+function lineAzimuth(elements: AlignmentElement[], i: number): number {
+  const next = elements[i + 1];
+  const prev = elements[i - 1];
+  if (next?.type === "arc") return next.startAzimuthDeg;
+  if (prev?.type === "arc") return prev.endAzimuthDeg;
+  return (elements[i] as { azimuthDeg: number }).azimuthDeg;
 }
 
 /** Neumaier-compensated sum, so that a long corridor's area keeps its last digits. */

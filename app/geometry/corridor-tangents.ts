@@ -10,40 +10,49 @@ import { addVec, crossVec, dotVec, scaleVec, subVec, type Vec2 } from "./vec2";
 
 /**
  * The quadrilaterals of one tangent, between its two joints. Cuts inside are perpendicular, at
- * width breakpoints and every `pieceLength` from the tangent's start; a linearly tapering width
- * gives a straight right-of-way line, so every piece is an exact trapezoid. Cuts are kept out of
- * the stretch an inside mitre reaches, so each piece stays convex; a width breakpoint there is not
- * honoured (the line runs straight from the last cut to the mitre corner). Throws `tangent_overrun`
- * when mitres at both ends cross, i.e. the tangent is too short for the width at its angle points.
+ * width breakpoints and every `pieceLength` — measured from the start over the first half and
+ * from the end over the second, so that when a neighbouring curve moves one end along the line
+ * the pieces anchored at the other end keep their exact coordinates (and their cached takes). A
+ * linearly tapering width gives a straight right-of-way line, so every piece is an exact
+ * trapezoid. Cuts are kept out of the stretch an inside mitre reaches, so each piece stays
+ * convex; a width breakpoint there is not honoured (the line runs straight from the last cut to
+ * the mitre corner). `azimuthDeg` is the line's direction; the caller passes the neighbouring
+ * curve's tangent azimuth, which comes straight from the PIs, rather than the direction between
+ * the tangent's computed ends, whose round-off changes whenever one end moves along the line.
+ * Throws `tangent_overrun` when the mitres at both ends cross.
  */
-export function buildTangentPieces(e: TangentElement, elementIndex: number, start: Joint, end: Joint, profile: WidthProfile, pieceLength: number): QuadPiece[] {
-  const u = scaleVec(subVec(e.end, e.start), 1 / e.length);
-  const n = rightNormal(e.azimuthDeg);
+export function buildTangentPieces(e: TangentElement, elementIndex: number, start: Joint, end: Joint, profile: WidthProfile, pieceLength: number, azimuthDeg = e.azimuthDeg): QuadPiece[] {
+  const n = rightNormal(azimuthDeg);
+  const u: Vec2 = [-n[1], n[0]];
   const along = (p: Vec2) => dotVec(subVec(p, e.start), u);
   const lo = Math.max(along(start.right), along(start.left), 0);
   const hi = Math.min(along(end.right), along(end.left), e.length);
-  const cuts = cutPositions(e, lo, hi, profile.breakpoints, pieceLength);
   const pieces: QuadPiece[] = [];
-  let from = { t: 0, right: start.right, left: start.left };
-  for (const t of [...cuts, e.length]) {
-    const s = e.startStation + t;
-    const centre = addVec(e.start, scaleVec(u, t));
-    const to = t === e.length ? { t, right: end.right, left: end.left } : { t, right: addVec(centre, scaleVec(n, profile.right(s))), left: addVec(centre, scaleVec(n, -profile.left(s))) };
+  let from: Cut = { t: 0, fromEnd: null, centre: e.start, right: start.right, left: start.left };
+  for (const c of cutPositions(e, lo, hi, profile.breakpoints, pieceLength)) {
+    const s = e.startStation + c.t;
+    const centre = c.fromEnd === null ? addVec(e.start, scaleVec(u, c.t)) : subVec(e.end, scaleVec(u, c.fromEnd));
+    const to: Cut = { ...c, centre, right: addVec(centre, scaleVec(n, profile.right(s))), left: addVec(centre, scaleVec(n, -profile.left(s))) };
     pieces.push(makeQuad(e, elementIndex, from, to, u, profile));
     from = to;
   }
+  pieces.push(makeQuad(e, elementIndex, from, { t: e.length, fromEnd: 0, centre: e.end, right: end.right, left: end.left }, u, profile));
   return pieces;
 }
 
-function cutPositions(e: TangentElement, lo: number, hi: number, breakpoints: number[], pieceLength: number): number[] {
-  const margin = 1e-9 * Math.max(1, e.length);
-  const cuts = breakpoints.map((b) => b - e.startStation).filter((t) => t > lo + margin && t < hi - margin);
-  for (let k = 1; k * pieceLength < hi - pieceLength / 4; k++) if (k * pieceLength > lo + margin) cuts.push(k * pieceLength);
-  cuts.sort((a, b) => a - b);
-  return cuts.filter((t, i) => i === 0 || t - cuts[i - 1]! > margin);
+/** Interior cuts in order: `t` from the start, and `fromEnd` (distance back from the end) for cuts anchored there. */
+function cutPositions(e: TangentElement, lo: number, hi: number, breakpoints: number[], pieceLength: number): { t: number; fromEnd: number | null }[] {
+  const L = e.length;
+  const margin = 1e-9 * Math.max(1, L);
+  const cuts = breakpoints.map((b) => ({ t: b - e.startStation, fromEnd: b - e.startStation > L / 2 ? e.endStation - b : null }));
+  for (let k = 1; k * pieceLength <= L / 2; k++) cuts.push({ t: k * pieceLength, fromEnd: null });
+  for (let k = 1; L - k * pieceLength > L / 2 + pieceLength / 4; k++) cuts.push({ t: L - k * pieceLength, fromEnd: k * pieceLength });
+  const inside = cuts.filter((c) => c.t > lo + margin && c.t < hi - margin).sort((a, b) => a.t - b.t);
+  return inside.filter((c, i) => i === 0 || c.t - inside[i - 1]!.t > margin);
 }
 
-type Cut = { t: number; right: Vec2; left: Vec2 };
+/** A cut across the tangent: position, anchoring, centreline point and the two corners. */
+type Cut = { t: number; fromEnd: number | null; centre: Vec2; right: Vec2; left: Vec2 };
 
 function makeQuad(e: TangentElement, elementIndex: number, from: Cut, to: Cut, u: Vec2, profile: WidthProfile): QuadPiece {
   const corners: [Vec2, Vec2, Vec2, Vec2] = [from.right, to.right, to.left, from.left];
@@ -58,13 +67,14 @@ function makeQuad(e: TangentElement, elementIndex: number, from: Cut, to: Cut, u
     elementIndex,
     stationFrom,
     stationTo,
-    length: to.t - from.t,
+    // Between two cuts anchored at the end, the length comes from the end (exact under a moved start).
+    length: from.fromEnd !== null && to.fromEnd !== null ? from.fromEnd - to.fromEnd : to.t - from.t,
     corners,
     bounds: boundsOf(corners),
     area: flatRingArea(local),
     tapered: profile.left(stationFrom) !== profile.left(stationTo) || profile.right(stationFrom) !== profile.right(stationTo),
     key: "",
-    along: alongAxis(u, subVec(o, addVec(e.start, scaleVec(u, from.t)))),
+    along: alongAxis(u, subVec(o, from.centre)),
     local,
   };
   piece.key = quadKey(piece);
