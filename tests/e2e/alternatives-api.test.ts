@@ -17,9 +17,12 @@ type Impacts = { summary: Record<string, number>; parcels: { parcelId: string; t
 let planner: Record<string, string>;
 let projectId: number;
 beforeAll(async () => {
+  // Write the zip before any request: a slow first GDAL run can outlast the server's keep-alive
+  // and the next request would then write into a closed socket.
+  const zip = shapefileZip(ROWS, "EPSG:32617");
   planner = await bearer("planner@demo.test");
   projectId = await newProject(planner, { name: "Quillmere Test Strip", units: "m", crs: "EPSG:32617" });
-  expect((await postLayer(projectId, planner, shapefileZip(ROWS, "EPSG:32617"), "strip.zip")).status).toBe(201);
+  expect((await postLayer(projectId, planner, zip, "strip.zip")).status).toBe(201);
 });
 
 async function createAlternative(body: Record<string, unknown>) {
