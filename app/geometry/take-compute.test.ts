@@ -15,6 +15,7 @@ const parcels: TakeParcelInput[] = [
   { parcelId: "C", polygons: [rect(400, -100, 500, 100)] },
   { parcelId: "D", polygons: [rect(800, 10, 900, 50)] },
   { parcelId: "E", polygons: [rect(600, 12, 700, 40)] },
+  { parcelId: "F", polygons: [[...rect(520, -100, 580, 100), ...rect(530, 50, 540, 60)]] },
 ];
 const buildings: TakeBuildingInput[] = [
   { buildingId: "hit-A", polygons: [rect(150, -5, 160, 0)] },
@@ -55,6 +56,10 @@ test("a parcel left with two strips below the remnant size is a full take; one c
   expect(c.remainderPieces).toBe(2);
   expect(c.remainderPieceAreas.map((x) => Number(x.toFixed(9)))).toEqual([9000, 9000]);
   expect(c.classification).toBe("partial");
+  // Cut in two with a 10 × 10 hole in the upper part: 60 × 90 below, 60 × 90 − 100 above.
+  const f = r.parcels.find((p) => p.parcelId === "F")!;
+  expect(f.takeArea).toBeCloseTo(1200, 9);
+  expect(f.remainderPieceAreas.map((x) => Number(x.toFixed(6)))).toEqual([5400, 5300]);
 });
 
 test("touching the right-of-way line is not a take; the easement alone lists the parcel without land cost", () => {
@@ -105,16 +110,16 @@ test("totals: corridor area, unparcelled land, counts; parcels in station order"
   const r = run();
   expect(r.corridorArea).toBeCloseTo(20_000, 9);
   expect(r.easementArea).toBeCloseTo(10_000, 9);
-  expect(r.totals.parcelTakeArea).toBeCloseTo(1500 + 400 + 2000, 9);
-  expect(r.totals.unparcelledArea).toBeCloseTo(20_000 - 3900, 9);
-  expect([r.totals.parcelsAffected, r.totals.fullTakes, r.totals.partialTakes]).toEqual([5, 1, 2]);
-  expect(r.parcels.map((p) => p.parcelId)).toEqual(["A", "B", "C", "E", "D"]);
+  expect(r.totals.parcelTakeArea).toBeCloseTo(1500 + 400 + 2000 + 1200, 9);
+  expect(r.totals.unparcelledArea).toBeCloseTo(20_000 - 5100, 9);
+  expect([r.totals.parcelsAffected, r.totals.fullTakes, r.totals.partialTakes]).toEqual([6, 1, 3]);
+  expect(r.parcels.map((p) => p.parcelId)).toEqual(["A", "B", "C", "F", "E", "D"]);
 });
 
 test("parcels that overlap inside the corridor are warned about", () => {
   const overlapping = [...parcels, { parcelId: "A2", polygons: [rect(150, -10, 170, 10)] }];
   const r = computeTakes({ elements, corridor, parcels: overlapping, rules });
-  expect(r.totals.unparcelledArea).toBeCloseTo(20_000 - 3900 - 400, 9);
+  expect(r.totals.unparcelledArea).toBeCloseTo(20_000 - 5100 - 400, 9);
   expect(r.warnings.some((w) => w.startsWith("Parcels overlap"))).toBe(false); // still under the corridor's area
   const stacked = [...parcels, { parcelId: "ALL", polygons: [rect(0, -10, 1000, 10)] }];
   const s = computeTakes({ elements, corridor, parcels: stacked, rules });

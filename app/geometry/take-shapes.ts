@@ -27,13 +27,16 @@ export interface PreparedShape {
 export function prepareShape(polygons: PolygonCoords[], field: string): PreparedShape {
   const prepared: PreparedPolygon[] = [];
   polygons.forEach((rings, pi) => {
-    const flat = rings.map((ring, ri) => flattenRing(ring, `${field}.${pi}.${ri}`)).filter((r) => r.length >= 6 && flatRingArea(r) !== 0);
+    const usable = (r: number[]) => r.length >= 6 && flatRingArea(r) !== 0;
+    const flat = rings.map((ring, ri) => flattenRing(ring, `${field}.${pi}.${ri}`));
     const exterior = flat[0];
-    if (!exterior) return;
+    if (!exterior || !usable(exterior)) return;
+    const holes = flat.slice(1).filter(usable);
     orient(exterior, true);
-    for (const hole of flat.slice(1)) orient(hole, false);
-    const area = flat.reduce((s, r) => s + flatRingArea(r), 0);
-    prepared.push({ rings: flat, area, bounds: flatBounds(exterior) });
+    for (const hole of holes) orient(hole, false);
+    const kept = [exterior, ...holes];
+    const area = kept.reduce((s, r) => s + flatRingArea(r), 0);
+    prepared.push({ rings: kept, area, bounds: flatBounds(exterior) });
   });
   const bounds = prepared.length > 0 ? prepared.map((p) => p.bounds).reduce((a, b) => [Math.min(a[0], b[0]), Math.min(a[1], b[1]), Math.max(a[2], b[2]), Math.max(a[3], b[3])]) : boundsOf([[0, 0]]);
   return { polygons: prepared, area: prepared.reduce((s, p) => s + p.area, 0), bounds: [...bounds] as Bounds };
