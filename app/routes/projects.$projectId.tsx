@@ -1,7 +1,7 @@
 import { data, Form, Link, useActionData, useLoaderData } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/projects.$projectId";
-import { Button } from "~/components/ui/button";
+import { Button, buttonClass } from "~/components/ui/button";
 import { Card } from "~/components/ui/card";
 import { Field, SelectField } from "~/components/ui/field";
 import { Table } from "~/components/ui/table";
@@ -20,7 +20,6 @@ import { listProjectLayers } from "~/models/layers.server";
 import { env } from "~/utils/env.server";
 import { AlternativeList } from "~/components/alternatives/alternative-list";
 import { NewAlternativeButton } from "~/components/alternatives/new-alternative-dialog";
-import { buttonClass } from "~/components/ui/button";
 import { findCrsByCode, parseEpsgCode } from "~/fabric/index.server";
 import { readLatestSummary } from "~/models/alternative-impacts.server";
 import { listAlternatives } from "~/models/alternatives.server";

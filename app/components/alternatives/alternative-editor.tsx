@@ -39,8 +39,8 @@ function draftOf(a: AlternativeJson): AlternativeDraft {
 export function AlternativeEditor({ alternative, projectId, projectName, layers, basemapStyleUrl, crsDefinition, editable }: EditorProps) {
   const crs = useMemo(() => createWorkingCrs(crsDefinition), [crsDefinition]);
   const editor = useAlternativeEditor(useMemo(() => draftOf(alternative), [alternative]), editable);
-  const preview = usePreview(alternative.id, editor.draft, editor.live);
   const autosave = useAutosave(alternative.id, alternative.version, editor.committed, editable);
+  const preview = usePreview(alternative.id, editor.draft, editor.live, autosave.state.version);
   const [selected, setSelected] = useState<number | null>(null);
   const edits = useDraftEdits(editor, selected, setSelected, editable);
   const units = editor.draft.alignment.units;
@@ -75,17 +75,17 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
       <Card title="Points of intersection">
         <PiTable alignment={editor.draft.alignment} curves={result?.geometry.curves ?? []} selected={selected} editable={editable} error={preview.error} actions={tableActions} />
       </Card>
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <Card title="Computed elements">
-          {result ? <CurveElements curves={result.geometry.curves} stations={result.geometry.stations} length={result.geometry.length} unit={lengthUnitLabel(units)} /> : <p className="text-sm text-ink-soft">Computing…</p>}
-        </Card>
+      <Card title="Computed elements">
+        {result ? <CurveElements curves={result.geometry.curves} stations={result.geometry.stations} length={result.geometry.length} unit={lengthUnitLabel(units)} /> : <p className="text-sm text-ink-soft">Computing…</p>}
+      </Card>
+      <div className="grid gap-6 lg:grid-cols-2">
         <Card title="Design checks">
           {result ? <DesignChecksPanel checks={checks} editable={editable} onAccept={edits.accept} onWithdraw={edits.withdraw} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>
+        <Card title="Corridor and design">
+          <DesignSettings draft={editor.draft} unit={lengthUnitLabel(units)} editable={editable} onChange={editor.commit} />
+        </Card>
       </div>
-      <Card title="Corridor and design">
-        <DesignSettings draft={editor.draft} unit={lengthUnitLabel(units)} editable={editable} onChange={editor.commit} />
-      </Card>
       <Card title="Curve trade-off">
         <CurveTradeoffPanel alternativeId={alternative.id} draft={editor.draft} piIndex={selected} editable={editable} flush={autosave.flush} onApply={edits.applySweep} />
       </Card>

@@ -1,5 +1,5 @@
 import { expect, test } from "vitest";
-import { linearScale, niceTicks, shortNumber, valueExtent } from "./chart-scale";
+import { linearScale, niceTicks, shortNumber, tickLabel, valueExtent } from "./chart-scale";
 
 test("a linear scale maps the ends of the domain to the ends of the range, and the middle to the middle", () => {
   const y = linearScale([0, 200], [150, 10]);
@@ -29,4 +29,13 @@ test("value axes start at zero for counts and areas, and ignore missing steps", 
   expect(valueExtent([40, 40], false)).toEqual([38, 42]);
   expect(shortNumber(12_500)).toBe("12.5k");
   expect(shortNumber(3_400_000)).toBe("3.4M");
+});
+
+test("tick labels keep enough decimals to tell neighbouring ticks apart", () => {
+  expect([150_800, 151_000, 151_200].map((v) => tickLabel(v, 200))).toEqual(["150.8k", "151k", "151.2k"]);
+  expect([0, 0.25, 0.5].map((v) => tickLabel(v, 0.25))).toEqual(["0", "0.25", "0.5"]);
+  expect(tickLabel(3_400_000, 100_000)).toBe("3.4M");
+  expect(tickLabel(400, 100)).toBe("400");
+  // Counts: a minimum step of 1 gives whole-number ticks only.
+  expect(niceTicks(13, 15, 5, 1)).toEqual([13, 14, 15]);
 });

@@ -10,14 +10,11 @@ export function linearScale(domain: [number, number], range: [number, number]): 
  * Round tick values covering [min, max]: the step is 1, 2 or 5 × 10ⁿ, chosen so about `count`
  * ticks fall in the range (P. Heckbert, "Nice numbers for graph labels", Graphics Gems, 1990).
  */
-export function niceTicks(min: number, max: number, count = 5): number[] {
+export function niceTicks(min: number, max: number, count = 5, minStep = 0): number[] {
   if (!Number.isFinite(min) || !Number.isFinite(max)) return [];
   if (max < min) [min, max] = [max, min];
   if (max === min) return [min];
-  const rough = (max - min) / Math.max(1, count - 1);
-  const power = 10 ** Math.floor(Math.log10(rough));
-  const fraction = rough / power;
-  const step = (fraction < 1.5 ? 1 : fraction < 3 ? 2 : fraction < 7 ? 5 : 10) * power;
+  const step = Math.max(niceStep(min, max, count), minStep);
   const first = Math.ceil(min / step - 1e-9) * step;
   const ticks: number[] = [];
   for (let v = first; v <= max + step * 1e-9; v += step) ticks.push(Number(v.toPrecision(12)));
@@ -44,4 +41,25 @@ export function shortNumber(v: number): string {
   if (a >= 1e6) return `${Number((v / 1e6).toPrecision(3))}M`;
   if (a >= 1e4) return `${Number((v / 1e3).toPrecision(3))}k`;
   return String(Number(v.toPrecision(4)));
+}
+
+/** The 1-2-5 step of {@link niceTicks}. */
+export function niceStep(min: number, max: number, count = 5): number {
+  const rough = Math.abs(max - min) / Math.max(1, count - 1);
+  if (rough === 0) return 1;
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const fraction = rough / power;
+  return (fraction < 1.5 ? 1 : fraction < 3 ? 2 : fraction < 7 ? 5 : 10) * power;
+}
+
+/**
+ * A tick label with as many decimals as the step needs, so neighbouring ticks never read the
+ * same: 150 800 and 151 000 at a 200 step → "150.8k", "151k"; 0.25 steps → "0.25".
+ */
+export function tickLabel(v: number, step: number): string {
+  const big = Math.abs(v) >= 1e6 ? 1e6 : Math.abs(v) >= 1e4 ? 1e3 : 1;
+  const suffix = big === 1e6 ? "M" : big === 1e3 ? "k" : "";
+  const scaledStep = String(Number((step / big).toPrecision(6)));
+  const decimals = scaledStep.includes("e-") ? 6 : (scaledStep.split(".")[1] ?? "").length;
+  return `${Number((v / big).toFixed(decimals))}${suffix}`;
 }

@@ -15,7 +15,7 @@ export function DesignSettings({ draft, unit, editable, onChange }: { draft: Alt
     </div>
   );
   return (
-    <div className="grid grid-cols-2 gap-4 sm:grid-cols-3" data-testid="design-settings">
+    <div className="grid grid-cols-2 gap-4" data-testid="design-settings">
       {field(`Left half-width (${unit})`, <NumberInput label={`Left right-of-way half-width (${unit})`} value={draft.corridor.left} min={0} max={10000} disabled={!editable} onCommit={(v) => corridor({ left: v })} />, "Looking ahead along stationing")}
       {field(`Right half-width (${unit})`, <NumberInput label={`Right right-of-way half-width (${unit})`} value={draft.corridor.right} min={0} max={10000} disabled={!editable} onCommit={(v) => corridor({ right: v })} />)}
       {field(`Easement width (${unit})`, <NumberInput label={`Construction easement width (${unit})`} value={draft.corridor.easement ?? 0} min={0} max={10000} disabled={!editable} onCommit={(v) => corridor({ easement: v })} />, "Beyond each right-of-way line; 0 for none")}

@@ -1,4 +1,4 @@
-import { linearScale, niceTicks, shortNumber, valueExtent } from "./chart-scale";
+import { linearScale, niceStep, niceTicks, shortNumber, tickLabel, valueExtent } from "./chart-scale";
 
 export interface SweepPoint {
   value: number;
@@ -19,10 +19,14 @@ const PAD = { left: 46, right: 12, top: 14, bottom: 36 };
  * minimum radius for the design speed as a dashed vertical line. A step is a button: it applies
  * its value to the PI (`onPick` absent: read only).
  */
-export function SweepChart({ title, xLabel, points, marker, onPick }: { title: string; xLabel: string; points: SweepPoint[]; marker?: { x: number; label: string } | null; onPick?: (value: number) => void }) {
+export function SweepChart({ title, xLabel, points, marker, onPick, integer = false }: { title: string; xLabel: string; points: SweepPoint[]; marker?: { x: number; label: string } | null; onPick?: (value: number) => void; integer?: boolean }) {
   const xs = points.map((p) => p.value);
   const domainX: [number, number] = [Math.min(...xs), Math.max(...xs)];
-  const domainY = valueExtent(points.flatMap((p) => (p.y === null ? [] : [p.y])), false);
+  const ys = points.flatMap((p) => (p.y === null ? [] : [p.y]));
+  // Counts get whole-number ticks and at least one unit either side of their values.
+  const domainY: [number, number] = integer && ys.length ? [Math.max(0, Math.min(...ys) - 1), Math.max(...ys) + 1] : valueExtent(ys, false);
+  const stepY = Math.max(niceStep(domainY[0], domainY[1], 5), integer ? 1 : 0);
+  const stepX = niceStep(domainX[0], domainX[1], 5);
   const sx = linearScale(domainX, [PAD.left, W - PAD.right]);
   const sy = linearScale(domainY, [H - PAD.bottom, PAD.top]);
   const drawn = points.filter((p) => p.y !== null);
@@ -32,14 +36,14 @@ export function SweepChart({ title, xLabel, points, marker, onPick }: { title: s
     <figure className="space-y-1" data-testid="sweep-chart">
       <figcaption className="text-sm font-semibold">{title}</figcaption>
       <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="group" aria-label={`${title} against ${xLabel}`}>
-        {niceTicks(domainY[0], domainY[1], 5).map((t) => (
+        {niceTicks(domainY[0], domainY[1], 5, stepY).map((t) => (
           <g key={`y${t}`}>
             <line x1={PAD.left} x2={W - PAD.right} y1={sy(t)} y2={sy(t)} stroke="#d9d4c6" strokeWidth={0.6} />
-            <text x={PAD.left - 4} y={sy(t) + 3} textAnchor="end" fontSize={9} fill="#4d5753">{shortNumber(t)}</text>
+            <text x={PAD.left - 4} y={sy(t) + 3} textAnchor="end" fontSize={9} fill="#4d5753">{tickLabel(t, stepY)}</text>
           </g>
         ))}
         {niceTicks(domainX[0], domainX[1], 5).map((t) => (
-          <text key={`x${t}`} x={sx(t)} y={H - PAD.bottom + 12} textAnchor="middle" fontSize={9} fill="#4d5753">{shortNumber(t)}</text>
+          <text key={`x${t}`} x={sx(t)} y={H - PAD.bottom + 12} textAnchor="middle" fontSize={9} fill="#4d5753">{tickLabel(t, stepX)}</text>
         ))}
         <line x1={PAD.left} x2={W - PAD.right} y1={H - PAD.bottom} y2={H - PAD.bottom} stroke="#b9b29f" />
         <text x={(PAD.left + W - PAD.right) / 2} y={H - 6} textAnchor="middle" fontSize={10} fill="#1e2422">{xLabel}</text>

@@ -3,11 +3,12 @@ import { formatCost, formatNumber } from "./format";
 import { SweepChart, type SweepPoint } from "./sweep-chart";
 import { VARIABLE_LABELS } from "./sweep-defaults";
 
-const METRICS: { key: keyof Pick<SweepStep, "takeArea" | "estimatedCost" | "parcelsAffected" | "displacements">; title: string }[] = [
+/** Take area in the project's square unit; cost in its currency. */
+const METRICS: { key: keyof Pick<SweepStep, "takeArea" | "estimatedCost" | "parcelsAffected" | "displacements">; title: string; integer?: boolean }[] = [
   { key: "takeArea", title: "Take area" },
   { key: "estimatedCost", title: "Estimated cost (order of magnitude)" },
-  { key: "parcelsAffected", title: "Parcels affected" },
-  { key: "displacements", title: "Buildings displaced" },
+  { key: "parcelsAffected", title: "Parcels affected", integer: true },
+  { key: "displacements", title: "Buildings displaced", integer: true },
 ];
 
 /** A step where any design check is unmet — accepted or not: the chart shows what the rule says. */
@@ -28,7 +29,7 @@ export function SweepCharts({ result, vary, unit, lengthUnit, onPick }: { result
       <div className="grid gap-4 sm:grid-cols-2">
         {METRICS.map((m) => {
           const points: SweepPoint[] = result.steps.map((s) => ({ value: s.value, y: s[m.key], failing: failing(s), note: note(s) }));
-          return <SweepChart key={m.key} title={m.title} xLabel={xLabel} points={points} marker={marker} onPick={onPick} />;
+          return <SweepChart key={m.key} title={m.title} xLabel={xLabel} points={points} marker={marker} onPick={onPick} integer={m.integer} />;
         })}
       </div>
       <details className="text-sm">

@@ -17,9 +17,10 @@ export interface PreviewState {
  * Recomputes corridor and takes for the draft without saving. While dragging (`live`), requests
  * go at most every PREVIEW_INTERVAL_MS, one at a time, and the newest waiting draft goes next —
  * the drafts in between are skipped. Any other edit cancels the request in flight (it is stale)
- * and asks at once. An answer older than the one shown is dropped.
+ * and asks at once. An answer older than the one shown is dropped. A new `savedVersion` asks
+ * again: the preview reviews design checks against the saved speed, emax and acceptances.
  */
-export function usePreview(alternativeId: number, draft: AlternativeDraft, live: boolean): PreviewState {
+export function usePreview(alternativeId: number, draft: AlternativeDraft, live: boolean, savedVersion = 0): PreviewState {
   const [state, setState] = useState<PreviewState>({ result: null, error: null, pending: true });
   const latest = useRef(draft);
   const flight = useRef<{ controller: AbortController; seq: number } | null>(null);
@@ -38,7 +39,7 @@ export function usePreview(alternativeId: number, draft: AlternativeDraft, live:
       flight.current = null;
       send();
     }
-  }, [draft]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [draft, savedVersion]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useEffect(() => () => {
     flight.current?.controller.abort();
