@@ -3,6 +3,8 @@ import type { AlignmentElement } from "./alignment-types";
 import { buildCorridor } from "./corridor-build";
 import { piecesRing } from "./corridor-outline";
 import { DISPLAY_CHORD_TOLERANCE, TAKE_MIN_AREA } from "./corridor-tolerances";
+import { extendBounds } from "./corridor-pieces";
+import type { Bounds } from "./corridor-types";
 import { indexBounds } from "./take-index";
 import { pieceAreas } from "./take-parcel";
 import { prepareShape } from "./take-shapes";
@@ -26,6 +28,7 @@ export function computeTakePolygons(input: { elements: AlignmentElement[]; corri
   const index = indexBounds(row.pieces.map((p) => p.bounds));
   const out: TakePolygon[] = [];
   input.parcels.forEach((parcel, i) => {
+    if (index.search(rawBounds(parcel.polygons)).length === 0) return; // cheap test before preparing the rings
     const shape = prepareShape(parcel.polygons, `parcels.${i}.polygons`);
     const hits = index.search(shape.bounds).sort((a, b) => a - b);
     if (hits.length === 0) return;
@@ -37,4 +40,10 @@ export function computeTakePolygons(input: { elements: AlignmentElement[]; corri
     out.push({ parcelId: parcel.parcelId, coordinates: clipped.map((poly) => poly.map((r) => r.map(([x, y]) => [x + ox, y + oy]))) });
   });
   return out;
+}
+
+function rawBounds(polygons: PolygonCoords[]): Bounds {
+  const b: Bounds = [Infinity, Infinity, -Infinity, -Infinity];
+  for (const rings of polygons) for (const p of rings[0] ?? []) extendBounds(b, Number(p[0]), Number(p[1]));
+  return b;
 }
