@@ -44,6 +44,8 @@ export default [
     route("alternatives/:id/landxml", "routes/api.v1.alternatives.$id.landxml.ts"),
     route("projects/:projectId/alternatives/import", "routes/api.v1.projects.$projectId.alternatives.import.ts"),
     route("alternatives/:id/parcels/:parcelId/description", "routes/api.v1.alternatives.$id.parcels.$parcelId.description.ts"),
+    route("alternatives/:id/parcels/:parcelId/exhibit.pdf", "routes/api.v1.alternatives.$id.parcels.$parcelId.exhibit[.]pdf.ts"),
+    route("projects/:projectId/report.pdf", "routes/api.v1.projects.$projectId.report[.]pdf.ts"),
     route("alternatives/:id/submit", "routes/api.v1.alternatives.$id.submit.ts"),
     route("alternatives/:id/withdraw", "routes/api.v1.alternatives.$id.withdraw.ts"),
     route("alternatives/:id/decision", "routes/api.v1.alternatives.$id.decision.ts"),

@@ -7,3 +7,4 @@ export { describeArea, formatCoordinates, formatDistance } from "./legal-format"
 export type { ArcCourse, BoundaryPart, BoundaryRing, BoundarySegment, Course, LineCourse, LineSource, RingClosure } from "./legal-types";
 export type { Commencement } from "./beginning-point";
 export { boundaryToPolygons, EXPORT_CHORD_TOLERANCE } from "./boundary-polygon";
+export { segmentsOfCourses } from "./course-segments";

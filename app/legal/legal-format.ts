@@ -41,6 +41,11 @@ export function formatPrecisionRatio(perimeter: number, misclosure: number): str
   return `1 in ${Math.round(perimeter / misclosure).toLocaleString("en-US")}`;
 }
 
+/** The words for the two area units of a length unit: {small: "m²", large: "ha"} and so on. */
+export function areaWords(units: LengthUnit): { small: string; large: string } {
+  return { small: AREA_PAIRS[units].smallWord, large: AREA_PAIRS[units].largeWord };
+}
+
 /** The words for a length unit ("m", "ft", "US survey ft"). */
 export function lengthWord(units: LengthUnit): string {
   return LENGTH_WORDS[units];
