@@ -11,7 +11,7 @@ import { requireUser } from "~/utils/permissions.server";
 import { requireAlternativeParam } from "~/utils/project-lookup.server";
 
 /**
- * `POST /api/v1/alternatives/:id/preview {alignment, corridor?, rules?}` → the alignment's
+ * `POST /api/v1/alternatives/:id/preview {alignment, corridor?, rules?, designSpeed?, speedUnit?, emaxPercent?, acceptedChecks?}` → the alignment's
  * geometry and checks, the takes and summary, and drawable outlines, for inputs not yet saved.
  */
 export const action = apiHandler(async ({ request, params }: Route.ActionArgs) => {
@@ -19,7 +19,18 @@ export const action = apiHandler(async ({ request, params }: Route.ActionArgs) =
   const user = await requireUser(request, { roles: ACCESS.projects });
   const { alternative, project } = requireAlternativeParam(params.id, user);
   const body = await readJsonBody(request, AlternativePreviewSchema);
-  const inputs = evaluationInputsOf({ ...alternative, alignment: body.alignment, corridor: body.corridor ?? alternative.corridor, rules: body.rules ?? alternative.rules }, project);
+  const inputs = evaluationInputsOf(
+    {
+      alignment: body.alignment,
+      corridor: body.corridor ?? alternative.corridor,
+      rules: body.rules ?? alternative.rules,
+      designSpeed: body.designSpeed ?? alternative.designSpeed,
+      speedUnit: body.speedUnit ?? alternative.speedUnit,
+      emaxPercent: body.emaxPercent ?? alternative.emaxPercent,
+      acceptedChecks: body.acceptedChecks ?? alternative.acceptedChecks,
+    },
+    project,
+  );
   const { session, land } = landSessionFor(project);
   const evaluation = evaluateAlternative(inputs, session);
   const { elements, curves, stations, length, centerline } = evaluation.geometry;

@@ -42,6 +42,10 @@ export const AlternativePreviewSchema = z.object({
   alignment: AlignmentSchema,
   corridor: CorridorSchema.optional(),
   rules: TakeRulesSchema.optional(),
+  designSpeed: AlternativeFields.designSpeed.optional(),
+  speedUnit: AlternativeFields.speedUnit.optional(),
+  emaxPercent: AlternativeFields.emaxPercent.optional(),
+  acceptedChecks: AlternativeFields.acceptedChecks.optional(),
   geometry: z.boolean().default(true),
 });
 
