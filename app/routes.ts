@@ -33,6 +33,7 @@ export default [
     route("projects/:projectId", "routes/api.v1.projects.$projectId.ts"),
     route("projects/:projectId/layers", "routes/api.v1.projects.$projectId.layers.ts"),
     route("projects/:projectId/layers/preview", "routes/api.v1.projects.$projectId.layers.preview.ts"),
+    route("projects/:projectId/layers/progress/:jobId", "routes/api.v1.projects.$projectId.layers.progress.$jobId.ts"),
     route("layers/:layerId/features", "routes/api.v1.layers.$layerId.features.ts"),
     route("projects/:projectId/alternatives", "routes/api.v1.projects.$projectId.alternatives.ts"),
     route("projects/:projectId/comparison", "routes/api.v1.projects.$projectId.comparison.ts"),

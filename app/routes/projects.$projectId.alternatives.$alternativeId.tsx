@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { Route } from "./+types/projects.$projectId.alternatives.$alternativeId";
 import { AlternativeEditor } from "~/components/alternatives/alternative-editor";
 import type { AlternativeJson } from "~/components/alternatives/api-types";
+import { DownloadLinks } from "~/components/exports/download-links";
 import { Card } from "~/components/ui/card";
 import { findCrsByCode, parseEpsgCode } from "~/fabric/index.server";
 import { readImpacts } from "~/models/alternative-impacts.server";
@@ -51,15 +52,18 @@ export default function AlternativePage() {
     );
   }
   return (
-    <AlternativeEditor
-      key={alternative.id}
-      alternative={alternative as unknown as AlternativeJson}
-      projectId={project.id}
-      projectName={project.name}
-      layers={layers}
-      basemapStyleUrl={basemapStyleUrl}
-      crsDefinition={crsDefinition}
-      editable={editable}
-    />
+    <>
+      <AlternativeEditor
+        key={alternative.id}
+        alternative={alternative as unknown as AlternativeJson}
+        projectId={project.id}
+        projectName={project.name}
+        layers={layers}
+        basemapStyleUrl={basemapStyleUrl}
+        crsDefinition={crsDefinition}
+        editable={editable}
+      />
+      <DownloadLinks kind="alternative" alternativeId={alternative.id} />
+    </>
   );
 }

@@ -3,6 +3,7 @@ import { z } from "zod";
 import type { Route } from "./+types/projects.$projectId.comparison";
 import type { AlternativeDraft } from "~/components/alternatives/api-types";
 import { ComparisonView } from "~/components/comparison/comparison-view";
+import { DownloadLinks } from "~/components/exports/download-links";
 import type { ComparisonJson } from "~/components/comparison/comparison-types";
 import { findCrsByCode, parseEpsgCode } from "~/fabric/index.server";
 import { listAlternatives } from "~/models/alternatives.server";
@@ -43,13 +44,16 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 export default function ComparisonPage() {
   const d = useLoaderData<typeof loader>();
   return (
-    <ComparisonView
-      project={d.project}
-      comparison={d.comparison as unknown as ComparisonJson}
-      drafts={d.drafts as unknown as { id: number; draft: AlternativeDraft }[]}
-      layers={d.layers}
-      basemapStyleUrl={d.basemapStyleUrl}
-      crsDefinition={d.crsDefinition}
-    />
+    <>
+      <ComparisonView
+        project={d.project}
+        comparison={d.comparison as unknown as ComparisonJson}
+        drafts={d.drafts as unknown as { id: number; draft: AlternativeDraft }[]}
+        layers={d.layers}
+        basemapStyleUrl={d.basemapStyleUrl}
+        crsDefinition={d.crsDefinition}
+      />
+      <DownloadLinks kind="comparison" projectId={d.project.id} />
+    </>
   );
 }
