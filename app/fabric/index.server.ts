@@ -7,6 +7,7 @@ export { FabricInputError, isFabricInputError, type FabricErrorCode } from "./er
 export type { AreaFeature, AreaGeometry, Properties, ReadOptions, ReadResult, RejectedRow } from "./types";
 export { readParcelUpload } from "./upload/read-parcel-upload.server";
 export type { ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload/upload-types";
+export { progressFraction, stageLabel, UPLOAD_STAGES, type ProgressSink, type UploadProgress, type UploadStage } from "./upload/progress";
 export { detectFormat, type FabricFormat } from "./upload/detect-format";
 export { readShapefileZip } from "./readers/shapefile-zip";
 export { readGeoJson } from "./readers/geojson";
@@ -19,7 +20,7 @@ export { utmZoneFor } from "./crs/utm-zone";
 export { METRES_PER_UNIT, convertArea, convertLength, type LengthUnit } from "./crs/units";
 export { polygonArea, ringArea } from "./geometry/area";
 export { FEATURE_ID_SOURCE, TARGET_ATTRIBUTES, guessFieldMapping, type FieldMapping, type TargetAttribute } from "./attributes/field-mapping";
-export { applyFieldMapping, type LandValueBasis, type MappedAttributes } from "./attributes/apply-mapping";
+export { applyFieldMapping, mapFeatureAttributes, settleFieldMapping, type LandValueBasis, type MappedAttributes } from "./attributes/apply-mapping";
 export { encodeTileFeatures, isTileInPyramid, sliceTile, tileBoundsWgs84, TILE_EXTENT, type TileFeature } from "./tiles/vector-tiles";
 export { indexOverview, overviewTile, worldXY, type OverviewIndex, type OverviewItem, type OverviewOptions, type OverviewProperties, type OverviewTile } from "./tiles/overview";
 export { TileCache, type CachedTile } from "./tiles/tile-cache";

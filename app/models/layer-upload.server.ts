@@ -4,6 +4,7 @@ import type { MultipartUpload } from "~/utils/multipart-upload.server";
 import { readLayerUpload } from "~/utils/read-layer-upload.server";
 import { crsCode, ingestLayer } from "./layer-ingest.server";
 import { forgetLayerTiles } from "./layer-tiles.server";
+import { startUploadJob } from "./layer-upload-progress.server";
 import type { Project } from "./projects.server";
 
 function summary(upload: ParcelUpload) {
@@ -20,17 +21,32 @@ function summary(upload: ParcelUpload) {
   };
 }
 
-/** Reads, checks and stores an uploaded layer in one transaction; the answer of the upload route. */
-export async function commitLayerUpload(project: Project, user: { id: number }, upload: MultipartUpload, fields: LayerUploadFields) {
-  const read = await readLayerUpload(project, upload, fields);
-  const layer = ingestLayer(project, user, { name: fields.name, kind: fields.kind, sourceFileName: upload.file!.fileName, replacesLayerId: fields.replacesLayerId }, read);
-  forgetLayerTiles(layer.id);
-  if (fields.replacesLayerId !== undefined) forgetLayerTiles(fields.replacesLayerId);
-  return { id: layer.id, kind: layer.kind, name: layer.name, status: layer.status, ...summary(read), mapping: read.mapping, replacesLayerId: fields.replacesLayerId ?? null };
+/**
+ * Reads, checks and stores an uploaded layer in one transaction; the answer of the upload route.
+ * With a job id, progress is reported for the client to poll (readUploadJob).
+ */
+export async function commitLayerUpload(project: Project, user: { id: number }, upload: MultipartUpload, fields: LayerUploadFields, jobId?: string) {
+  const job = startUploadJob(jobId, user, project.id);
+  try {
+    const read = await readLayerUpload(project, upload, fields, job.report);
+    job.report?.({ stage: "storing", done: 0, total: read.featureCount });
+    const layer = ingestLayer(project, user, { name: fields.name, kind: fields.kind, sourceFileName: upload.file!.fileName, replacesLayerId: fields.replacesLayerId }, read);
+    job.report?.({ stage: "storing", done: read.featureCount, total: read.featureCount });
+    forgetLayerTiles(layer.id);
+    if (fields.replacesLayerId !== undefined) forgetLayerTiles(fields.replacesLayerId);
+    return { id: layer.id, kind: layer.kind, name: layer.name, status: layer.status, ...summary(read), mapping: read.mapping, replacesLayerId: fields.replacesLayerId ?? null };
+  } finally {
+    job.finish();
+  }
 }
 
 /** Reads and checks an upload without storing it: what the mapping screen shows before committing. */
-export async function previewLayerUpload(project: Project, upload: MultipartUpload, fields: Omit<LayerUploadFields, "name">) {
-  const read = await readLayerUpload(project, upload, fields);
-  return { fieldNames: read.fieldNames, sampleRows: read.sampleRows, mapping: read.mapping, format: read.format, ...summary(read) };
+export async function previewLayerUpload(project: Project, user: { id: number }, upload: MultipartUpload, fields: Omit<LayerUploadFields, "name">, jobId?: string) {
+  const job = startUploadJob(jobId, user, project.id);
+  try {
+    const read = await readLayerUpload(project, upload, fields, job.report);
+    return { fieldNames: read.fieldNames, sampleRows: read.sampleRows, mapping: read.mapping, format: read.format, ...summary(read) };
+  } finally {
+    job.finish();
+  }
 }

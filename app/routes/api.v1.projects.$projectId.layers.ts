@@ -1,5 +1,6 @@
 import type { Route } from "./+types/api.v1.projects.$projectId.layers";
 import { commitLayerUpload } from "~/models/layer-upload.server";
+import { uploadJobIdOf } from "~/models/layer-upload-progress.server";
 import { listProjectLayers, toLayerJson } from "~/models/layers.server";
 import { findProjectForUser } from "~/models/projects.server";
 import { IdParamSchema, LayerUploadFieldsSchema } from "~/schemas/layer-schemas";
@@ -29,11 +30,12 @@ export const loader = apiHandler(async ({ request, params }: Route.LoaderArgs) =
  * `POST /api/v1/projects/:projectId/layers` (planner; multipart `file`, `name`, `kind`,
  * `sourceCrs?`, `fields?`, `replacesLayerId?`) → `201 {id, kind, featureCount, rejected, warnings, sourceCrs, bbox, ...}`.
  * Membership is checked before the body is read, so a non-member cannot make the server read a file.
+ * An `Upload-Job-Id` header lets the client poll `.../layers/progress/:jobId` while the file is processed.
  */
 export const action = apiHandler(async ({ request, params }: Route.ActionArgs) => {
   requireMethod(request, "POST");
   const user = await requireUser(request, { roles: ACCESS.createProject });
   const project = memberProject(params.projectId, user);
   return withLayerUpload(request, LayerUploadFieldsSchema, async (upload, fields) =>
-    Response.json(await commitLayerUpload(project, user, upload, fields), { status: 201 }));
+    Response.json(await commitLayerUpload(project, user, upload, fields, uploadJobIdOf(request)), { status: 201 }));
 });

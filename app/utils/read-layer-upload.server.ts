@@ -1,4 +1,4 @@
-import { readParcelUpload, type FieldMapping, type ParcelUpload } from "~/fabric/index.server";
+import { readParcelUpload, type FieldMapping, type ParcelUpload, type ProgressSink } from "~/fabric/index.server";
 import type { LayerUploadFields } from "~/schemas/layer-schemas";
 import type { MultipartUpload } from "./multipart-upload.server";
 import { UploadInputError } from "./upload-errors.server";
@@ -12,7 +12,7 @@ type Choices = Omit<LayerUploadFields, "name"> & { name?: string | undefined };
  * empty file and unsafe or oversized zips first, then lets the fabric reader do the rest in
  * the project's working CRS (when it has one) with areas in the project's unit.
  */
-export async function readLayerUpload(project: { crs: string | null; units: "m" | "ft" | "usft" }, upload: MultipartUpload, choices: Choices): Promise<ParcelUpload> {
+export async function readLayerUpload(project: { crs: string | null; units: "m" | "ft" | "usft" }, upload: MultipartUpload, choices: Choices, onProgress?: ProgressSink): Promise<ParcelUpload> {
   if (!upload.file) throw new UploadInputError("missing_file", "Attach the layer file as the `file` part of the form.");
   if (upload.file.size === 0) throw new UploadInputError("empty_file", `"${upload.file.fileName}" is empty (0 bytes); export the layer again and upload the new file.`, { fileName: upload.file.fileName });
   const bytes = await upload.readFileBytes();
@@ -26,5 +26,6 @@ export async function readLayerUpload(project: { crs: string | null; units: "m" 
     ...(choices.fields ? { fields: choices.fields as Partial<FieldMapping> } : {}),
     ...(project.crs ? { workingCrs: project.crs } : {}),
     ...(choices.landValueBasis ? { landValueBasis: choices.landValueBasis } : {}),
+    ...(onProgress ? { onProgress } : {}),
   });
 }

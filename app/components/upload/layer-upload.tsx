@@ -43,7 +43,8 @@ export function LayerUpload({ projectId }: { projectId: number }) {
     setError(null);
     setStep({ kind: "busy", phase: { phase: "uploading", fraction: 0 } });
     try {
-      return await sendWithProgress(`/api/v1/projects/${projectId}/layers${path}`, form(withFields), (phase) => setStep({ kind: "busy", phase }));
+      const base = `/api/v1/projects/${projectId}/layers`;
+      return await sendWithProgress(`${base}${path}`, base, form(withFields), (phase) => setStep({ kind: "busy", phase }));
     } catch (e) {
       setStep({ kind: "choose" });
       setError({ code: "network", message: e instanceof Error ? e.message : String(e) });

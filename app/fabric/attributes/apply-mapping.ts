@@ -47,8 +47,8 @@ function sourceValue(f: AreaFeature, field: string | null): unknown {
   return field === FEATURE_ID_SOURCE ? f.id : f.properties[field];
 }
 
-/** Maps and validates one feature; a reason string when it cannot be used. */
-function mapOne(f: AreaFeature, mapping: FieldMapping, options: MappingOptions): MappedAttributes | string {
+/** Maps and validates one feature's attributes; a reason string when it cannot be used. */
+export function mapFeatureAttributes(f: AreaFeature, mapping: FieldMapping, options: MappingOptions): MappedAttributes | string {
   const land = parseLandValue(sourceValue(f, mapping.landValue));
   if ("error" in land) return land.error;
   const candidate = {
@@ -81,20 +81,28 @@ function duplicateReasons(mapped: { f: AreaFeature; m: MappedAttributes }[]): Ma
 }
 
 /**
- * Applies a field mapping to read features and validates the result with zod:
- * parcels need a parcel ID, unique in the layer; land values must be
- * non-negative numbers. Unusable rows come back in `rejected` with reasons.
+ * Sorts features mapped one by one (`mapFeatureAttributes`, in the same order) into usable and
+ * rejected rows; parcels that share a parcel ID are all rejected.
  */
-export function applyFieldMapping<F extends AreaFeature>(features: F[], mapping: FieldMapping, options: MappingOptions = { kind: "parcels", landValueBasis: "total" }): { mapped: { feature: F; attributes: MappedAttributes }[]; rejected: RejectedRow[] } {
+export function settleFieldMapping<F extends AreaFeature>(features: F[], results: (MappedAttributes | string)[], options: MappingOptions): { mapped: { feature: F; attributes: MappedAttributes }[]; rejected: RejectedRow[] } {
   const rejected: RejectedRow[] = [];
   const ok: { f: F; m: MappedAttributes }[] = [];
-  for (const f of features) {
-    const m = mapOne(f, mapping, options);
+  features.forEach((f, i) => {
+    const m = results[i]!;
     if (typeof m === "string") rejected.push({ row: f.sourceRow, reason: m });
     else ok.push({ f, m });
-  }
+  });
   const dupes = options.kind === "parcels" ? duplicateReasons(ok) : new Map<AreaFeature, string>();
   for (const [f, reason] of dupes) rejected.push({ row: f.sourceRow, reason });
   const mapped = ok.filter(({ f }) => !dupes.has(f)).map(({ f, m }) => ({ feature: f, attributes: m }));
   return { mapped, rejected: rejected.sort((a, b) => a.row - b.row) };
+}
+
+/**
+ * Applies a field mapping to read features and validates the result with zod:
+ * parcels need a parcel ID, unique in the layer; land values must be
+ * non-negative numbers. Unusable rows come back in `rejected` with reasons.
+ */
+export function applyFieldMapping<F extends AreaFeature>(features: F[], mapping: FieldMapping, options: MappingOptions = { kind: "parcels", landValueBasis: "total" }) {
+  return settleFieldMapping(features, features.map((f) => mapFeatureAttributes(f, mapping, options)), options);
 }

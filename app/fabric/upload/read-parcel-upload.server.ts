@@ -4,10 +4,12 @@ import { detectFormat, type FabricFormat } from "./detect-format";
 import { chooseSourceCrs, chooseWorkingCrs } from "./choose-crs";
 import { chooseMapping } from "./mapping-choice";
 import type { ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload-types";
+import type { UploadProgress } from "./progress";
 import { readShapefileZip } from "../readers/shapefile-zip";
 import { readGeoJson } from "../readers/geojson";
 import { readGeoPackage } from "../readers/geopackage.server";
-import { applyFieldMapping, type MappedAttributes } from "../attributes/apply-mapping";
+import { mapFeatureAttributes, settleFieldMapping, type MappedAttributes } from "../attributes/apply-mapping";
+import { mapInChunks, yieldToEventLoop } from "./chunked.server";
 import { findCrsByCode } from "../crs/epsg-list";
 import { geometryConverter } from "../crs/reproject";
 import type { ResolvedCrs } from "../crs/resolve-crs";
@@ -62,23 +64,32 @@ function toUploaded(f: AreaFeature, attrs: MappedAttributes, wgs84: AreaFeature[
  * answers 422 and stores nothing).
  */
 export async function readParcelUpload(input: ParcelUploadInput): Promise<ParcelUpload> {
+  const report = input.onProgress;
+  report?.({ stage: "reading", done: 0, total: 1 });
   const format = detectFormat(input.fileName, input.bytes);
   const read = await readByFormat(format, input.bytes, input.layer);
+  report?.({ stage: "reading", done: 1, total: 1 });
+  await yieldToEventLoop();
   refuseEmpty(read, input.kind === "parcels" ? "parcels" : "building footprints");
   const warnings = [...read.warnings];
   const sourceCrs = chooseSourceCrs(read, format, input.sourceCrs, warnings);
   const mapping = chooseMapping(read.features, read.fieldNames, input.kind, input.fields);
-  const { mapped, rejected } = applyFieldMapping(read.features, mapping, { kind: input.kind, landValueBasis: input.landValueBasis ?? "total" });
+  const options = { kind: input.kind, landValueBasis: input.landValueBasis ?? "total" } as const;
+  const results = await mapInChunks(read.features, (f) => mapFeatureAttributes(f, mapping, options), "attributes", report);
+  const { mapped, rejected } = settleFieldMapping(read.features, results, options);
   if (mapped.length === 0) refuseEmpty({ ...read, features: [], rejected: [...read.rejected, ...rejected] }, input.kind);
+  // Two passes over the features make up the coordinates stage: to WGS84, then to the working CRS.
+  const n = mapped.length;
+  const half = (offset: number) => (p: UploadProgress) => report?.({ stage: "coordinates", done: offset + p.done, total: 2 * n });
   const toWgs84 = geometryConverter(sourceCrs.proj4, WGS84);
-  const wgs84 = mapped.map((m) => toWgs84(m.feature.geometry));
+  const wgs84 = await mapInChunks(mapped, (m) => toWgs84(m.feature.geometry), "coordinates", half(0));
   const bbox = bboxOf(wgs84)!;
   const aou = areaOfUseWarning(sourceCrs, bbox);
   if (aou) warnings.push(aou);
   const workingCrs = chooseWorkingCrs(input.workingCrs, bbox);
   const areaUnit = input.areaUnit ?? workingCrs.unit!;
   const toWorking = geometryConverter(sourceCrs.proj4, workingCrs.proj4);
-  const features = mapped.map((m, i) => toUploaded(m.feature, m.attributes, wgs84[i]!, toWorking, workingCrs, areaUnit));
+  const features = await mapInChunks(mapped, (m, i) => toUploaded(m.feature, m.attributes, wgs84[i]!, toWorking, workingCrs, areaUnit), "coordinates", half(n));
   return {
     format, features, featureCount: features.length,
     rejected: [...read.rejected, ...rejected].sort((a, b) => a.row - b.row),

@@ -4,6 +4,7 @@ import type { LandValueBasis, MappedAttributes } from "../attributes/apply-mappi
 import type { ResolvedCrs } from "../crs/resolve-crs";
 import type { LengthUnit } from "../crs/units";
 import type { FabricFormat } from "./detect-format";
+import type { ProgressSink } from "./progress";
 
 /** What the upload route hands over: the file and the planner's choices. */
 export interface ParcelUploadInput {
@@ -22,6 +23,8 @@ export interface ParcelUploadInput {
   landValueBasis?: LandValueBasis;
   /** Unit for reported areas (the project's unit); default: the working CRS's unit. */
   areaUnit?: LengthUnit;
+  /** Told how far processing is; the work yields to the event loop between chunks so reports can be read. */
+  onProgress?: ProgressSink;
 }
 
 /** One accepted parcel or footprint. */
