@@ -7,6 +7,7 @@
  * shapely, STRtree, timed inside python), (d) the largest per-parcel difference from GEOS, and
  * (e) a 40-step radius sweep at one PI. Needs Debian's python3-shapely for (c) and (d).
  */
+import { cpus, loadavg } from "node:os";
 import type { AlignmentInput } from "../app/geometry/alignment-types";
 import { computeAlignmentGeometry } from "../app/geometry/compute-alignment-geometry";
 import { createTakeSession } from "../app/geometry/take-session";
@@ -55,16 +56,20 @@ function median(xs: number[]): number {
   return s[Math.floor(s.length / 2)]!;
 }
 
-function timeRuns(runs: number, f: (k: number) => void): number {
+/** Median and fastest wall time of `runs` calls, ms (the fastest shows the cost when the machine is not shared). */
+function timeRuns(runs: number, f: (k: number) => void): { median: number; min: number } {
   const times: number[] = [];
   for (let k = 0; k < runs; k++) {
     const t = performance.now();
     f(k);
     times.push(performance.now() - t);
   }
-  return median(times);
+  return { median: median(times), min: Math.min(...times) };
 }
 
+const fmt = (t: { median: number; min: number }) => `median ${t.median.toFixed(2)} ms (fastest ${t.min.toFixed(2)} ms)`;
+
+console.log(`load average ${loadavg().map((l) => l.toFixed(1)).join(" ")} on ${cpus().length} CPUs (timings are wall clock; a shared machine inflates them)`);
 const t0 = performance.now();
 const parcels = makeFabric();
 const t1 = performance.now();
@@ -79,21 +84,21 @@ for (let k = 0; k < 5; k++) {
   session.clear();
   session.compute(base, CORRIDOR, RULES);
 }
-const full = timeRuns(15, () => {
+const full = timeRuns(31, () => {
   session.clear();
   session.compute(base, CORRIDOR, RULES);
 });
 const result = session.compute(base, CORRIDOR, RULES);
 const candidates = session.stats.candidates;
 console.log(`alignment ${(length / 1000).toFixed(2)} km, right-of-way 30 + 30 m: ${candidates} bbox candidates, ${result.parcels.length} parcels taken (${result.totals.fullTakes} full, ${result.totals.partialTakes} partial), corridor ${result.corridorArea.toFixed(3)} m²`);
-console.log(`(a) full take computation: median ${full.toFixed(2)} ms (goal < 20 ms)`);
+console.log(`(a) full take computation: ${fmt(full)} (goal < 20 ms)`);
 
 let measured = 0;
-const drag = timeRuns(21, (k) => {
+const drag = timeRuns(31, (k) => {
   session.compute(k % 2 === 0 ? moved : base, CORRIDOR, RULES);
   measured = session.stats.measured;
 });
-console.log(`(b) recompute after moving PI 2 by 3 m (session): median ${drag.toFixed(2)} ms, ${measured} of ${session.stats.candidates} candidates measured again (goal < 10 ms)`);
+console.log(`(b) recompute after moving PI 2 by 3 m (session): ${fmt(drag)}, ${measured} of ${session.stats.candidates} candidates measured again (goal < 10 ms)`);
 
 session.compute(base, CORRIDOR, RULES);
 const sweepStart = performance.now();
@@ -108,7 +113,7 @@ console.log(`take polygons for display (polyclip-ts, 1 cm chords): ${polygons.le
 if (process.argv.includes("--no-geos")) process.exit(0); // quick runs while tuning: skip (c) and (d)
 const geos = runGeosTakes({ elements: base, corridor: CORRIDOR, parcels: parcels.map((p) => ({ id: p.parcelId, polygons: p.polygons })), repeat: 5, geosSagitta: 0.01 });
 console.log(`(c) GEOS overlay (shapely: STRtree queries by 100 m boxes along the line, prepared intersects, intersection areas; loading the fabric and building the tree not timed): median ${(geos.overlaySeconds * 1000).toFixed(1)} ms with the reference corridor (${geos.vertices} vertices, 1e-5 m chords); ${((geos.coarseOverlaySeconds ?? 0) * 1000).toFixed(1)} ms with 1 cm chords (${geos.coarseVertices} vertices); ${geos.candidates} STRtree candidates`);
-console.log(`    ratio ours/GEOS: ${(full / (geos.overlaySeconds * 1000)).toFixed(3)} (fine corridor), ${(full / ((geos.coarseOverlaySeconds ?? 1) * 1000)).toFixed(3)} (1 cm corridor) (goal ≤ 0.5)`);
+console.log(`    ratio ours/GEOS (medians): ${(full.median / (geos.overlaySeconds * 1000)).toFixed(3)} against the fine corridor, ${(full.median / ((geos.coarseOverlaySeconds ?? 1) * 1000)).toFixed(3)} against the 1 cm one (goal ≤ 0.5)`);
 const byId = new Map(result.parcels.map((p) => [p.parcelId, p.takeArea]));
 let maxDiff = 0;
 for (const id of new Set([...byId.keys(), ...Object.keys(geos.takes)])) maxDiff = Math.max(maxDiff, Math.abs((byId.get(id) ?? 0) - (geos.takes[id] ?? 0)));

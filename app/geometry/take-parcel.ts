@@ -46,24 +46,26 @@ export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: 
 
 /** Exact area of (shape ∩ pieces), in total and per polygon of the shape, and the stations it spans. */
 export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPolygon: number[]; span: RelativeSpan | null } {
-  const perPolygon = shape.polygons.map(() => 0);
+  const polygons = shape.polygons;
+  const perPolygon = new Array<number>(polygons.length).fill(0);
   let span: RelativeSpan | null = null;
-  const pieceSpan: [number, number] = [Infinity, -Infinity];
+  const along: [number, number] = [Infinity, -Infinity];
   let total = 0;
-  pieces.forEach((piece, k) => {
+  for (let k = 0; k < pieces.length; k++) {
+    const piece = pieces[k]!;
     let inPiece = 0;
-    pieceSpan[0] = Infinity;
-    pieceSpan[1] = -Infinity;
-    shape.polygons.forEach((polygon, i) => {
-      if (!boundsOverlap(piece.bounds, polygon.bounds)) return;
-      const a = polygonPieceArea(polygon, piece, pieceSpan);
+    along[0] = Infinity;
+    along[1] = -Infinity;
+    for (let i = 0; i < polygons.length; i++) {
+      if (!boundsOverlap(piece.bounds, polygons[i]!.bounds)) continue;
+      const a = polygonPieceArea(polygons[i]!, piece, along);
       perPolygon[i]! += a;
       inPiece += a;
-    });
+    }
     total += inPiece;
     // A piece the shape only touches must not stretch the span.
-    if (inPiece > TAKE_MIN_AREA && pieceSpan[0] <= pieceSpan[1]) span = widen(span, k, pieceSpan);
-  });
+    if (inPiece > TAKE_MIN_AREA && along[0] <= along[1]) span = widen(span, k, along);
+  }
   return { total, perPolygon, span };
 }
 

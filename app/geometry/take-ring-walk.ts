@@ -1,5 +1,4 @@
-import { boundsOverlap } from "./corridor-pieces";
-import type { Bounds, CorridorPiece } from "./corridor-types";
+import type { CorridorPiece } from "./corridor-types";
 import { segmentPieceIntervals, type TaggedInterval } from "./take-intervals";
 
 /** Where a ring's boundary crosses the corridor boundary: edge, parameter, point and boundary tag. */
@@ -41,7 +40,11 @@ interface Stretch {
 export function walkRing(ring: ArrayLike<number>, pieces: CorridorPiece[], eps = 1e-9): RingWalk {
   const n = ring.length;
   const lengths: number[] = [];
-  for (let i = 0; i < n; i += 2) lengths.push(Math.hypot(ring[(i + 2) % n]! - ring[i]!, ring[(i + 3) % n]! - ring[i + 1]!));
+  for (let i = 0; i < n; i += 2) {
+    const dx = ring[(i + 2) % n]! - ring[i]!;
+    const dy = ring[(i + 3) % n]! - ring[i + 1]!;
+    lengths.push(Math.sqrt(dx * dx + dy * dy));
+  }
   const stretches: Stretch[] = [];
   const ivs: TaggedInterval[] = [];
   for (let e = 0; e < lengths.length; e++) {
@@ -51,14 +54,23 @@ export function walkRing(ring: ArrayLike<number>, pieces: CorridorPiece[], eps =
     const py = ring[2 * e + 1]!;
     const qx = ring[(2 * e + 2) % n]!;
     const qy = ring[(2 * e + 3) % n]!;
-    const b: Bounds = [Math.min(px, qx), Math.min(py, qy), Math.max(px, qx), Math.max(py, qy)];
-    for (const p of pieces) if (boundsOverlap(p.bounds, b)) segmentPieceIntervals(px, py, qx, qy, p, ivs);
-    ivs.sort((a, c) => a.t0 - c.t0);
-    for (const iv of ivs) append(stretches, { e0: e, t0: iv.t0, tag0: iv.tag0, e1: e, t1: iv.t1, tag1: iv.tag1 }, lengths, eps);
+    const x0 = Math.min(px, qx);
+    const x1 = Math.max(px, qx);
+    const y0 = Math.min(py, qy);
+    const y1 = Math.max(py, qy);
+    for (const p of pieces) {
+      const pb = p.bounds;
+      if (pb[0] <= x1 && x0 <= pb[2] && pb[1] <= y1 && y0 <= pb[3]) segmentPieceIntervals(px, py, qx, qy, p, ivs);
+    }
+    if (ivs.length > 1) ivs.sort(byStart);
+    for (const iv of ivs) append(stretches, e, iv, lengths, eps);
   }
   if (stretches.length > 1 && along(lengths, stretches[stretches.length - 1]!, stretches[0]!, eps, true) <= eps) {
     const last = stretches.pop()!;
-    Object.assign(stretches[0]!, { e0: last.e0, t0: last.t0, tag0: last.tag0 });
+    const first = stretches[0]!;
+    first.e0 = last.e0;
+    first.t0 = last.t0;
+    first.tag0 = last.tag0;
   }
   const kept = stretches.filter((s) => stretchLength(lengths, s, eps) > eps);
   if (kept.length === 0) return { runs: [], state: "outside" };
@@ -70,13 +82,28 @@ export function walkRing(ring: ArrayLike<number>, pieces: CorridorPiece[], eps =
   return { runs, state: "crossing" };
 }
 
-function append(list: Stretch[], s: Stretch, lengths: number[], eps: number): void {
+const byStart = (a: TaggedInterval, b: TaggedInterval) => a.t0 - b.t0;
+
+/** Adds edge e's inside interval to the stretches, merging it into the last one across a gap ≤ eps. */
+function append(list: Stretch[], e: number, iv: TaggedInterval, lengths: number[], eps: number): void {
   const last = list[list.length - 1];
-  if (!last || along(lengths, last, s, eps) > eps) {
-    list.push(s);
+  const gap = last ? (last.e1 === e ? (iv.t0 - last.t1) * lengths[e]! : gapTo(lengths, last, e, iv.t0, eps)) : Infinity;
+  if (!last || gap > eps) {
+    list.push({ e0: e, t0: iv.t0, tag0: iv.tag0, e1: e, t1: iv.t1, tag1: iv.tag1 });
     return;
   }
-  if (s.e1 !== last.e1 || s.t1 > last.t1) Object.assign(last, { e1: s.e1, t1: s.t1, tag1: s.tag1 });
+  if (e !== last.e1 || iv.t1 > last.t1) {
+    last.e1 = e;
+    last.t1 = iv.t1;
+    last.tag1 = iv.tag1;
+  }
+}
+
+/** Distance along the ring from the end of `a` (on an earlier edge) to parameter t0 on edge e. */
+function gapTo(lengths: number[], a: Stretch, e: number, t0: number, cap: number): number {
+  let d = (1 - a.t1) * lengths[a.e1]!;
+  for (let k = (a.e1 + 1) % lengths.length; k !== e && d <= cap; k = (k + 1) % lengths.length) d += lengths[k]!;
+  return d + t0 * lengths[e]!;
 }
 
 /**

@@ -7,7 +7,7 @@ import { measureBuilding, findOwnerParcel, type BuildingMeasure } from "./take-b
 import { createKeyInterner, indexBounds, type BoundsIndex } from "./take-index";
 import { measureParcel, type ParcelMeasure } from "./take-parcel";
 import { requireTakeRules } from "./take-rules-check";
-import { prepareShape, type PreparedShape } from "./take-shapes";
+import { prepareShape } from "./take-shapes";
 import type { CorridorInput, TakeBuildingInput, TakeParcelInput, TakeResult, TakeRules } from "./take-types";
 import { BUILDING_HIT_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
 
@@ -78,15 +78,14 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
     requireTakeRules(rules);
     const row = buildCorridor(elements, corridor);
     const wide = row.easement;
-    const rowIdx = indexPieces(row);
-    const wideIdx = wide ? indexPieces(wide) : null;
+    const rowHitsOf = hitsByItem(row, parcelIndex);
+    const wideHitsOf = wide ? hitsByItem(wide, parcelIndex) : new Map<number, CorridorPiece[]>();
     Object.assign(stats, { candidates: 0, measured: 0, reused: 0 });
     const measures = new Map<number, MeasuredParcel>();
-    for (const i of candidatesOf(wide ?? row, parcelIndex)) {
+    for (const i of sortedKeys(wide ? wideHitsOf : rowHitsOf)) {
       const shape = parcelShapes[i]!;
-      const rowHits = hitsOf(row, rowIdx, shape);
-      const wideHits = wide && wideIdx ? hitsOf(wide, wideIdx, shape) : [];
-      if (rowHits.length + wideHits.length === 0) continue;
+      const rowHits = rowHitsOf.get(i) ?? [];
+      const wideHits = wideHitsOf.get(i) ?? [];
       stats.candidates++;
       const key = keyOf([rowHits, wideHits]);
       let cached = parcelCache[i];
@@ -98,19 +97,20 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
       }
       measures.set(i, { measure: cached.value, row: rowHits, wide: wideHits });
     }
-    const findings = buildings.length > 0 ? findBuildings(elements, corridor, rules, row, rowIdx) : [];
+    const findings = buildings.length > 0 ? findBuildings(elements, corridor, rules, row) : [];
     return assembleTakeResult({ row, parcels, parcelShapes, measures, findings, rules, buildingValue: (j) => buildings[j]!.value ?? rules.buildingValue });
   }
 
-  function findBuildings(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules, row: Corridor, rowIdx: BoundsIndex): BuildingFinding[] {
+  function findBuildings(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules, row: Corridor): BuildingFinding[] {
     const d = rules.proximityDistance;
     const prox = d > 0 ? buildWidened(elements, corridor, d, resolvePieceOptions(corridor), "rules.proximityDistance") : row;
-    const proxIdx = d > 0 ? indexPieces(prox) : rowIdx;
+    const rowHitsOf = hitsByItem(row, buildingIndex);
+    const proxHitsOf = d > 0 ? hitsByItem(prox, buildingIndex) : rowHitsOf;
     const found: BuildingFinding[] = [];
-    for (const j of candidatesOf(prox, buildingIndex)) {
+    for (const j of sortedKeys(proxHitsOf)) {
       const shape = buildingShapes[j]!;
-      const rowHits = hitsOf(row, rowIdx, shape);
-      const proxHits = hitsOf(prox, proxIdx, shape);
+      const rowHits = rowHitsOf.get(j) ?? [];
+      const proxHits = proxHitsOf.get(j)!;
       const key = keyOf([rowHits, proxHits]);
       let cached = buildingCache[j];
       if (cached?.key !== key) buildingCache[j] = cached = { key, value: measureBuilding(shape, rowHits, proxHits) };
@@ -129,17 +129,22 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
   return { compute, clear, stats };
 }
 
-function indexPieces(c: Corridor): BoundsIndex {
-  return indexBounds(c.pieces.map((p) => p.bounds));
+/**
+ * For every indexed item whose bounds meet a piece's, the pieces it meets, in station order: one
+ * index query per piece (the relation is symmetric, so no query per item is needed).
+ */
+function hitsByItem(c: Corridor, index: BoundsIndex): Map<number, CorridorPiece[]> {
+  const hits = new Map<number, CorridorPiece[]>();
+  for (const p of c.pieces) {
+    for (const i of index.search(p.bounds)) {
+      const list = hits.get(i);
+      if (list) list.push(p);
+      else hits.set(i, [p]);
+    }
+  }
+  return hits;
 }
 
-function hitsOf(c: Corridor, idx: BoundsIndex, shape: PreparedShape): CorridorPiece[] {
-  return idx.search(shape.bounds).sort((a, b) => a - b).map((k) => c.pieces[k]!);
-}
-
-/** Items of `index` whose bounds meet any piece's bounds, ascending. */
-function candidatesOf(c: Corridor, index: BoundsIndex): number[] {
-  const seen = new Set<number>();
-  for (const p of c.pieces) for (const i of index.search(p.bounds)) seen.add(i);
-  return [...seen].sort((a, b) => a - b);
+function sortedKeys(m: Map<number, unknown>): number[] {
+  return [...m.keys()].sort((a, b) => a - b);
 }

@@ -1,6 +1,5 @@
 import type { AnnularPiece, CorridorPiece, QuadPiece } from "./corridor-types";
 import type { ClippedRing } from "./take-clip";
-import { circleInterval } from "./take-intervals";
 
 /**
  * A station span kept relative to pieces — each end is [index in a list of pieces, distance along
@@ -26,7 +25,9 @@ export function spanStations(span: RelativeSpan, pieces: CorridorPiece[]): [numb
  */
 export function extendQuadSpan(c: ClippedRing, piece: QuadPiece, span: [number, number]): void {
   const len = piece.length;
-  const [ux, uy, offset] = piece.along;
+  const ux = piece.along[0];
+  const uy = piece.along[1];
+  const offset = piece.along[2];
   const d = c.data;
   for (let i = 0; i < c.length; i += 2) {
     const along = Math.min(len, Math.max(0, d[i]! * ux + d[i + 1]! * uy + offset));
@@ -37,31 +38,54 @@ export function extendQuadSpan(c: ClippedRing, piece: QuadPiece, span: [number, 
 export function extendAnnularSpan(c: ClippedRing, piece: AnnularPiece, span: [number, number]): void {
   const d = c.data;
   const n = c.length;
-  const add = (x: number, y: number) => include(span, stationAtPoint(piece, x, y));
   for (let i = 0; i < n; i += 2) {
     const px = d[i]!;
     const py = d[i + 1]!;
-    if (inAnnulus(piece, px, py)) add(px, py);
+    if (inAnnulus(piece, px, py)) include(span, stationAtPoint(piece, px, py));
     const dx = d[(i + 2) % n]! - px;
     const dy = d[(i + 3) % n]! - py;
-    for (const side of [piece.outer, piece.inner]) {
-      const iv = circleInterval(px - side.center[0], py - side.center[1], dx, dy, side.radius);
-      if (!iv) continue;
-      for (const t of iv) if (t >= 0 && t <= 1 && inAnnulus(piece, px + t * dx, py + t * dy)) add(px + t * dx, py + t * dy);
-    }
+    crossings(piece, piece.outer, px, py, dx, dy, span);
+    crossings(piece, piece.inner, px, py, dx, dy, span);
   }
+}
+
+/** Adds the stations where segment p + t·d (0 ≤ t ≤ 1) crosses a side circle inside the annulus. */
+function crossings(piece: AnnularPiece, side: AnnularPiece["outer"], px: number, py: number, dx: number, dy: number, span: [number, number]): void {
+  const ax = px - side.center[0];
+  const ay = py - side.center[1];
+  const a = dx * dx + dy * dy;
+  if (a === 0) return;
+  const b = ax * dx + ay * dy;
+  const disc = b * b - a * (ax * ax + ay * ay - side.radius * side.radius);
+  if (disc < 0) return;
+  const s = Math.sqrt(disc);
+  crossingAt(piece, px, py, dx, dy, (-b - s) / a, span);
+  crossingAt(piece, px, py, dx, dy, (-b + s) / a, span);
+}
+
+function crossingAt(piece: AnnularPiece, px: number, py: number, dx: number, dy: number, t: number, span: [number, number]): void {
+  const x = px + t * dx;
+  const y = py + t * dy;
+  if (t >= 0 && t <= 1 && inAnnulus(piece, x, y)) include(span, stationAtPoint(piece, x, y));
 }
 
 function inAnnulus(piece: AnnularPiece, x: number, y: number): boolean {
   const o = piece.outer;
   const i = piece.inner;
   const slack = 1e-9 * o.radius;
-  return Math.hypot(x - o.center[0], y - o.center[1]) <= o.radius + slack && Math.hypot(x - i.center[0], y - i.center[1]) >= i.radius - slack;
+  const ox = x - o.center[0];
+  const oy = y - o.center[1];
+  const ix = x - i.center[0];
+  const iy = y - i.center[1];
+  const ro = o.radius + slack;
+  const ri = Math.max(0, i.radius - slack);
+  return ox * ox + oy * oy <= ro * ro && ix * ix + iy * iy >= ri * ri;
 }
 
 /** Distance along the centreline from the slice's first ray to the angle of a point (relative to the centre). */
 function stationAtPoint(piece: AnnularPiece, x: number, y: number): number {
-  const [fx, fy] = piece.rayFrom;
+  const fx = piece.rayFrom[0];
+  const fy = piece.rayFrom[1];
   const theta = piece.turn * Math.atan2(fx * y - fy * x, fx * x + fy * y);
   const q = Math.min(1, Math.max(0, theta / piece.sweepRad));
   return q * piece.length;
