@@ -4,7 +4,7 @@
  * browser code imports the plain modules (e.g. crs/epsg-list) directly.
  */
 export { FabricInputError, isFabricInputError, type FabricErrorCode } from "./errors";
-export type { AreaFeature, AreaGeometry, Properties, ReadOptions, ReadResult, RejectedRow } from "./types";
+export type { AreaFeature, AreaGeometry, Properties, ReadOptions, ReadResult, RejectedRow, RepairedRow } from "./types";
 export { readParcelUpload } from "./upload/read-parcel-upload.server";
 export type { ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload/upload-types";
 export { progressFraction, stageLabel, UPLOAD_STAGES, type ProgressSink, type UploadProgress, type UploadStage } from "./upload/progress";

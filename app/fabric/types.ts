@@ -18,6 +18,12 @@ export interface RejectedRow {
   reason: string;
 }
 
+/** A source row kept after safe repairs, with what was done (e.g. "closed 1 unclosed ring"). */
+export interface RepairedRow {
+  row: number;
+  repairs: string[];
+}
+
 /**
  * What every reader returns. Coordinates are in the file's own CRS, untouched
  * except for ring orientation (RFC 7946: exterior counter-clockwise, holes clockwise).
@@ -31,6 +37,8 @@ export interface ReadResult {
   /** The EPSG code the file declares (GeoPackage organization, GeoJSON legacy `crs`). */
   sourceEpsg?: number;
   rejected: RejectedRow[];
+  /** Rows kept after safe geometry repairs, with the notes. */
+  repaired: RepairedRow[];
   warnings: string[];
 }
 

@@ -11,6 +11,7 @@ function summary(upload: ParcelUpload) {
   return {
     featureCount: upload.featureCount,
     rejected: upload.rejected,
+    repaired: upload.repaired,
     warnings: upload.warnings,
     sourceCrs: crsCode(upload.sourceCrs),
     sourceCrsName: upload.sourceCrs.name,

@@ -2,9 +2,10 @@ import { Button } from "~/components/ui/button";
 import { Table } from "~/components/ui/table";
 
 export type RejectedRow = { row: number; reason: string };
+export type RepairedRow = { row: number; repairs: string[] };
 
-function downloadCsv(rows: RejectedRow[], fileName: string) {
-  const text = ["row,reason", ...rows.map((r) => `${r.row},"${r.reason.replace(/"/g, '""')}"`)].join("\n") + "\n";
+function downloadCsv(header: string, lines: [number, string][], fileName: string) {
+  const text = [header, ...lines.map(([row, note]) => `${row},"${note.replace(/"/g, '""')}"`)].join("\n") + "\n";
   const url = URL.createObjectURL(new Blob([text], { type: "text/csv" }));
   const a = document.createElement("a");
   a.href = url;
@@ -13,8 +14,25 @@ function downloadCsv(rows: RejectedRow[], fileName: string) {
   URL.revokeObjectURL(url);
 }
 
-/** Rows the checks refused, with the reasons, downloadable so they can be fixed at the source. */
-export function RejectedRows({ rows, warnings }: { rows: RejectedRow[]; warnings: string[] }) {
+/** A counted, downloadable table of rows with one note each. */
+function RowNotes({ title, noun, header, lines, fileName }: { title: string; noun: string; header: string; lines: [number, string][]; fileName: string }) {
+  if (lines.length === 0) return null;
+  return (
+    <>
+      <div className="flex items-center justify-between">
+        <p className="text-sm font-semibold">{lines.length} row{lines.length === 1 ? "" : "s"} {title}</p>
+        <Button variant="secondary" onClick={() => downloadCsv(header, lines, fileName)}>Download the list</Button>
+      </div>
+      <Table rows={lines.slice(0, 200)} rowKey={([row, note]) => `${row}-${note}`} columns={[{ header: "Row", cell: ([row]) => row, align: "right" }, { header: noun, cell: ([, note]) => note }]} />
+    </>
+  );
+}
+
+/**
+ * Rows the checks refused, with the reasons, and rows kept after a safe geometry repair, with
+ * what was done; both downloadable so they can be fixed at the source.
+ */
+export function RejectedRows({ rows, warnings, repaired = [] }: { rows: RejectedRow[]; warnings: string[]; repaired?: RepairedRow[] }) {
   return (
     <div className="space-y-3">
       {warnings.length > 0 && (
@@ -22,15 +40,8 @@ export function RejectedRows({ rows, warnings }: { rows: RejectedRow[]; warnings
           {warnings.map((w) => <li key={w}>{w}</li>)}
         </ul>
       )}
-      {rows.length > 0 && (
-        <>
-          <div className="flex items-center justify-between">
-            <p className="text-sm font-semibold">{rows.length} row{rows.length === 1 ? "" : "s"} refused</p>
-            <Button variant="secondary" onClick={() => downloadCsv(rows, "refused-rows.csv")}>Download the list</Button>
-          </div>
-          <Table rows={rows.slice(0, 200)} rowKey={(r) => `${r.row}-${r.reason}`} columns={[{ header: "Row", cell: (r) => r.row, align: "right" }, { header: "Reason", cell: (r) => r.reason }]} />
-        </>
-      )}
+      <RowNotes title="refused" noun="Reason" header="row,reason" lines={rows.map((r) => [r.row, r.reason])} fileName="refused-rows.csv" />
+      <RowNotes title="repaired and kept" noun="Repair" header="row,repair" lines={repaired.map((r) => [r.row, r.repairs.join("; ")])} fileName="repaired-rows.csv" />
     </div>
   );
 }

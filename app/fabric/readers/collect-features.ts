@@ -1,5 +1,6 @@
 import type { Geometry, Position } from "geojson";
-import type { AreaFeature, AreaGeometry, Properties, RejectedRow } from "../types";
+import type { AreaFeature, AreaGeometry, Properties, RejectedRow, RepairedRow } from "../types";
+import { repairGeometry } from "../geometry/repair-polygon";
 import { findGeometryProblem } from "../geometry/validate-polygon";
 import { normalizeOrientation } from "../geometry/ring-orientation";
 
@@ -12,10 +13,11 @@ export interface RawRow {
   problem?: string;
 }
 
-/** Rows sorted into usable parcels and rejected rows (1-based row numbers). */
+/** Rows sorted into usable parcels and rejected rows (1-based row numbers), and the rows repaired on the way. */
 export interface CollectedRows {
   features: AreaFeature[];
   rejected: RejectedRow[];
+  repaired: RepairedRow[];
   warnings: string[];
 }
 
@@ -65,25 +67,33 @@ function areaGeometry(g: Geometry | null | undefined): { geometry: AreaGeometry;
 }
 
 /**
- * Checks each row's geometry and keeps valid polygons whole, with RFC 7946
- * winding; Z values are dropped with one warning. Invalid, empty and
- * non-polygon rows are returned as rejected with the reason.
+ * Checks each row's geometry and keeps valid polygons whole, with RFC 7946 winding, after the
+ * safe repairs of `repairGeometry` (noted per row); Z values are dropped with one warning.
+ * Invalid, empty and non-polygon rows are returned as rejected with the reason.
+ * `checkWinding` notes rings wound against RFC 7946 (for GeoJSON, where that is the rule).
  */
-export function collectFeatures(rows: RawRow[]): CollectedRows {
+export function collectFeatures(rows: RawRow[], options: { checkWinding?: boolean } = {}): CollectedRows {
   const features: AreaFeature[] = [];
   const rejected: RejectedRow[] = [];
+  const repaired: RepairedRow[] = [];
   let zRows = 0;
   rows.forEach((r, i) => {
     const area = r.problem ?? areaGeometry(r.geometry);
-    const problem = typeof area === "string" ? area : findGeometryProblem(area.geometry);
-    if (problem !== null || typeof area === "string") {
-      rejected.push({ row: i + 1, reason: problem === "empty polygon" ? "empty geometry" : problem! });
+    if (typeof area === "string") {
+      rejected.push({ row: i + 1, reason: area });
       return;
     }
+    const fixed = repairGeometry(area.geometry, options);
+    const problem = findGeometryProblem(fixed.geometry);
+    if (problem !== null) {
+      rejected.push({ row: i + 1, reason: problem === "empty polygon" ? "empty geometry" : problem });
+      return;
+    }
+    if (fixed.repairs.length > 0) repaired.push({ row: i + 1, repairs: fixed.repairs });
     if (area.hadZ) zRows++;
     const feature: AreaFeature = {
       type: "Feature",
-      geometry: normalizeOrientation(area.geometry),
+      geometry: normalizeOrientation(fixed.geometry),
       properties: cleanProperties(r.properties),
       sourceRow: i + 1,
     };
@@ -91,7 +101,7 @@ export function collectFeatures(rows: RawRow[]): CollectedRows {
     features.push(feature);
   });
   const warnings = zRows > 0 ? [`Heights (Z values) on ${zRows} rows were dropped; areas are planar.`] : [];
-  return { features, rejected, warnings };
+  return { features, rejected, repaired, warnings };
 }
 
 /** Field names in first-seen order across rows. */

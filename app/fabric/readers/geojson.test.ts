@@ -38,13 +38,14 @@ test("non-polygon, empty and malformed features are rejected by row", () => {
   const features = [
     { type: "Feature", properties: {}, geometry: { type: "Point", coordinates: [0, 0] } },
     { type: "Feature", properties: {}, geometry: { type: "Polygon", coordinates: [] } },
-    { type: "Feature", properties: {}, geometry: { type: "Polygon", coordinates: [[[0, 0], [1, 0], [1, 1]]] } },
+    { type: "Feature", properties: {}, geometry: { type: "Polygon", coordinates: [[[0, 0], [1, 0], [1, 0]]] } },
     { type: "Feature", properties: {}, geometry: null },
   ];
   const r = readGeoJson(utf8({ type: "FeatureCollection", features }));
   expect(r.rejected).toEqual([
     { row: 1, reason: "not a polygon (Point)" },
     { row: 2, reason: "empty geometry" },
+    // Too few corners to close safely, so it stays unclosed and is refused.
     { row: 3, reason: expect.stringMatching(/not closed/) },
     { row: 4, reason: "no geometry" },
   ]);
@@ -73,4 +74,21 @@ test("heights are dropped from 3D rings with one warning; 2D rows keep their ver
   const r = readGeoJson(utf8({ type: "FeatureCollection", features: [flat, tall].map((ring, i) => ({ type: "Feature", properties: { PIN: `Q-${i}` }, geometry: { type: "Polygon", coordinates: [ring] } })) }));
   expect(r.features.map((f) => f.geometry.coordinates[0])).toEqual([flat, tall.map(([x, y]) => [x, y])]);
   expect(r.warnings).toEqual(["Heights (Z values) on 1 rows were dropped; areas are planar."]);
+});
+
+test("safe repairs keep a row and say what was done; a self-intersecting row is still refused by number", () => {
+  const features = [
+    { type: "Feature", properties: { PIN: "Q-1" }, geometry: { type: "Polygon", coordinates: [[[0, 0], [10, 0], [10, 10], [0, 10]]] } },
+    { type: "Feature", properties: { PIN: "Q-2" }, geometry: { type: "Polygon", coordinates: [[[20, 0], [30, 0], [30, 10], [30, 14], [30, 10], [20, 10], [20, 0]]] } },
+    { type: "Feature", properties: { PIN: "Q-3" }, geometry: { type: "Polygon", coordinates: [[[40, 0], [50, 10], [50, 0], [40, 10], [40, 0]]] } },
+    { type: "Feature", properties: { PIN: "Q-4" }, geometry: { type: "Polygon", coordinates: [[[60, 0], [70, 0], [70, 10], [60, 10], [60, 0]]] } },
+  ];
+  const r = readGeoJson(utf8({ type: "FeatureCollection", features }));
+  expect(r.features.map((f) => f.properties.PIN)).toEqual(["Q-1", "Q-2", "Q-4"]);
+  expect(r.repaired).toEqual([
+    { row: 1, repairs: ["closed 1 unclosed ring (first point repeated at the end)"] },
+    { row: 2, repairs: ["removed 1 zero-area spike"] },
+  ]);
+  expect(r.rejected).toEqual([{ row: 3, reason: expect.stringMatching(/self-intersects/) }]);
+  expect(r.features[1]!.geometry.coordinates[0]).toHaveLength(5);
 });

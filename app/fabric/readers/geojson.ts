@@ -50,7 +50,8 @@ export function readGeoJson(bytes: Uint8Array): ReadResult {
     if (typeof f?.id === "string" || typeof f?.id === "number") row.id = f.id;
     return row;
   });
-  const collected = collectFeatures(rows);
+  // RFC 7946 §3.1.6: exterior rings counter-clockwise, holes clockwise.
+  const collected = collectFeatures(rows, { checkWinding: true });
   const result: ReadResult = { ...collected, fieldNames: fieldNamesOf(rows), warnings: [...warnings, ...collected.warnings] };
   if (sourceEpsg !== undefined) result.sourceEpsg = sourceEpsg;
   return result;

@@ -1,5 +1,5 @@
 import { FabricInputError } from "../errors";
-import type { AreaFeature, ReadResult } from "../types";
+import type { AreaFeature, ReadResult, RepairedRow } from "../types";
 import { detectFormat, type FabricFormat } from "./detect-format";
 import { chooseSourceCrs, chooseWorkingCrs } from "./choose-crs";
 import { chooseMapping } from "./mapping-choice";
@@ -55,6 +55,12 @@ function toUploaded(f: AreaFeature, attrs: MappedAttributes, wgs84: AreaFeature[
   return out;
 }
 
+/** Repair notes of the rows that were finally kept (a repaired row may still fail its attributes). */
+function keptRows(repaired: RepairedRow[], features: UploadedFeature[]): RepairedRow[] {
+  const kept = new Set(features.map((f) => f.sourceRow));
+  return repaired.filter((r) => kept.has(r.row));
+}
+
 /**
  * Reads an uploaded parcel fabric (or building footprints) end to end:
  * detects the format, reads the one polygon layer, resolves the source CRS,
@@ -93,6 +99,7 @@ export async function readParcelUpload(input: ParcelUploadInput): Promise<Parcel
   return {
     format, features, featureCount: features.length,
     rejected: [...read.rejected, ...rejected].sort((a, b) => a.row - b.row),
+    repaired: keptRows(read.repaired, features),
     warnings, sourceCrs, workingCrs, areaUnit, bbox,
     fieldNames: read.fieldNames,
     sampleRows: read.features.slice(0, 20).map((f) => f.properties),

@@ -1,4 +1,4 @@
-import type { AreaGeometry, Properties, RejectedRow } from "../types";
+import type { AreaGeometry, Properties, RejectedRow, RepairedRow } from "../types";
 import type { FieldMapping } from "../attributes/field-mapping";
 import type { LandValueBasis, MappedAttributes } from "../attributes/apply-mapping";
 import type { ResolvedCrs } from "../crs/resolve-crs";
@@ -47,6 +47,8 @@ export interface ParcelUpload {
   features: UploadedFeature[];
   featureCount: number;
   rejected: RejectedRow[];
+  /** Accepted rows whose geometry was safely repaired, with what was done. */
+  repaired: RepairedRow[];
   warnings: string[];
   sourceCrs: ResolvedCrs;
   workingCrs: ResolvedCrs;
