@@ -123,7 +123,7 @@ console.log(`take polygons for display (polyclip-ts, 1 cm chords): ${polygons.le
 
 if (process.argv.includes("--no-geos")) process.exit(0); // quick runs while tuning: skip (c) and (d)
 const geos = runGeosTakes({ elements: base, corridor: CORRIDOR, parcels: parcels.map((p) => ({ id: p.parcelId, polygons: p.polygons })), repeat: 5, geosSagitta: 0.01 });
-console.log(`(c) GEOS overlay (shapely: STRtree queries by 100 m boxes along the line, prepared intersects, intersection areas; loading the fabric and building the tree not timed): median ${(geos.overlaySeconds * 1000).toFixed(1)} ms with the reference corridor (${geos.vertices} vertices, 1e-5 m chords); ${((geos.coarseOverlaySeconds ?? 0) * 1000).toFixed(1)} ms with 1 cm chords (${geos.coarseVertices} vertices); ${geos.candidates} STRtree candidates`);
+console.log(`(c) GEOS overlay (shapely: STRtree queries by 100 m boxes along the line, prepared intersects, intersection areas; loading the fabric and building the tree not timed): median ${(geos.overlaySeconds * 1000).toFixed(1)} ms with the reference corridor (${geos.vertices} vertices, 1e-5 m chords); ${((geos.coarseOverlaySeconds ?? 0) * 1000).toFixed(1)} ms with 1 cm chords (${geos.coarseVertices} vertices, takes up to ${(geos.coarseMaxDiff ?? NaN).toFixed(3)} m² off); ${geos.candidates} STRtree candidates`);
 console.log(`    ratio ours/GEOS (medians): ${(full.median / (geos.overlaySeconds * 1000)).toFixed(3)} against the fine corridor, ${(full.median / ((geos.coarseOverlaySeconds ?? 1) * 1000)).toFixed(3)} against the 1 cm one (goal ≤ 0.5)`);
 const byId = new Map(result.parcels.map((p) => [p.parcelId, p.takeArea]));
 let maxDiff = 0;

@@ -219,9 +219,10 @@ def main():
         times = []
         for _ in range(repeat):
             t0 = time.perf_counter()
-            overlay(coarse, ids, geoms, tree, boxes)
+            coarse_takes = overlay(coarse, ids, geoms, tree, boxes)
             times.append(time.perf_counter() - t0)
         out["coarseOverlaySeconds"] = sorted(times)[len(times) // 2]
+        out["coarseMaxDiff"] = max(abs(coarse_takes.get(k, 0) - takes.get(k, 0)) for k in set(takes) | set(coarse_takes))
         out["coarseVertices"] = len(coarse.exterior.coords)
     out["vertices"] = len(row.exterior.coords)
     if job.get("pieces"):

@@ -38,6 +38,8 @@ export interface GeosResult {
   overlaySeconds: number;
   coarseOverlaySeconds?: number;
   coarseVertices?: number;
+  /** Largest per-parcel difference between the coarse and the reference corridor's takes. */
+  coarseMaxDiff?: number;
   fabricSeconds: number;
   candidates: number;
   vertices: number;
