@@ -52,22 +52,29 @@ function linkCells(values: Float64Array, nx: number, ny: number): Map<number, nu
     (links.get(p) ?? links.set(p, []).get(p)!).push(q);
     (links.get(q) ?? links.set(q, []).get(q)!).push(p);
   };
+  // Scalars only in this loop (it visits every cell): no arrays per cell.
   for (let i = 0; i + 1 < nx; i++) {
     for (let j = 0; j + 1 < ny; j++) {
+      const va = values[i * ny + j]!;
+      const vb = values[(i + 1) * ny + j]!;
+      const vc = values[(i + 1) * ny + j + 1]!;
+      const vd = values[i * ny + j + 1]!;
       // A cell with an undefined corner (NaN: outside the domain) is left out.
-      const [va, vb, vc, vd] = [values[i * ny + j]!, values[(i + 1) * ny + j]!, values[(i + 1) * ny + j + 1]!, values[i * ny + j + 1]!];
       if (Number.isNaN(va + vb + vc + vd)) continue;
       const [a, b, c, d] = [va >= 0, vb >= 0, vc >= 0, vd >= 0];
+      if (a === b && b === c && c === d) continue;
       const [bottom, right, top, left] = [i * ny + j, H + (i + 1) * (ny - 1) + j, i * ny + j + 1, H + i * (ny - 1) + j];
-      const cut = [a !== b && bottom, b !== c && right, c !== d && top, d !== a && left].filter((e): e is number => e !== false);
-      if (cut.length === 2) link(cut[0]!, cut[1]!);
-      else if (cut.length === 4) {
+      if (a !== b && b !== c && c !== d) {
         // Saddle, by the asymptotic decider (G. M. Nielson and B. Hamann, IEEE Visualization
         // 1991): the corners of the sign of the bilinear interpolant at its saddle are joined.
-        const saddle = (va * vc - vb * vd) / (va + vc - vb - vd);
-        const joined = (saddle >= 0) === a;
+        const joined = ((va * vc - vb * vd) / (va + vc - vb - vd) >= 0) === a;
         link(joined ? bottom : left, joined ? right : bottom);
         link(joined ? top : right, joined ? left : top);
+      } else {
+        // Exactly two cut edges: the first cut (in the order bottom, right, top, left) and the other.
+        const first = a !== b ? bottom : b !== c ? right : top;
+        const second = d !== a ? left : c !== d ? top : right;
+        link(first, second);
       }
     }
   }

@@ -69,19 +69,37 @@ function searchDip(f: ScalarFn, a: number, b: number, c: number, fa: number, fb:
  * inverse quadratic or secant steps, falling back to bisection, on a sign-changing bracket.
  */
 export function refineZero(f: ScalarFn, a: number, b: number, fa: number, fb: number): number {
-  let [c, fc, d, e] = [a, fa, b - a, b - a];
+  // Scalars, not destructuring: this runs for every bracket and contour node.
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
   for (let it = 0; it < MAX_BRENT_STEPS; it++) {
-    if (fb * fc > 0) [c, fc, d, e] = [a, fa, b - a, b - a];
-    if (Math.abs(fc) < Math.abs(fb)) [a, b, c, fa, fb, fc] = [b, c, b, fb, fc, fb];
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = e = b - a;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
+    }
     const tol = 2 * Number.EPSILON * Math.abs(b) + 1e-300;
     const m = (c - b) / 2;
     if (Math.abs(m) <= tol || fb === 0) return b;
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
-      const [p, q] = interpolationStep(a, b, c, fa, fb, fc);
-      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) [e, d] = [d, p / q];
-      else [e, d] = [m, m];
-    } else [e, d] = [m, m];
-    [a, fa] = [b, fb];
+      const step = interpolationStep(a, b, c, fa, fb, fc);
+      if (2 * step.p < Math.min(3 * m * step.q - Math.abs(tol * step.q), Math.abs(e * step.q))) {
+        e = d;
+        d = step.p / step.q;
+      } else d = e = m;
+    } else d = e = m;
+    a = b;
+    fa = fb;
     b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
     fb = f(b);
     if (!(fb === fb)) return a;
@@ -90,7 +108,7 @@ export function refineZero(f: ScalarFn, a: number, b: number, fa: number, fb: nu
 }
 
 /** Brent's step as p/q with p ≥ 0: secant when a = c, inverse quadratic otherwise. */
-function interpolationStep(a: number, b: number, c: number, fa: number, fb: number, fc: number): [number, number] {
+function interpolationStep(a: number, b: number, c: number, fa: number, fb: number, fc: number): { p: number; q: number } {
   const m = (c - b) / 2;
   const s = fb / fa;
   let p: number;
@@ -104,5 +122,5 @@ function interpolationStep(a: number, b: number, c: number, fa: number, fb: numb
     p = s * (2 * m * qa * (qa - r) - (b - a) * (r - 1));
     q = (qa - 1) * (r - 1) * (s - 1);
   }
-  return p > 0 ? [p, -q] : [-p, q];
+  return p > 0 ? { p, q: -q } : { p: -p, q };
 }
