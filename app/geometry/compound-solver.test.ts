@@ -164,3 +164,15 @@ test("both arcs known only by length: {T_PC, L1, L2, LC} returns twin curves 0.7
   expect(Math.abs(twin.delta1 - 30.453304)).toBeLessThan(1);
   expect(Math.abs(twin.delta2 - 84.679875)).toBeLessThan(1);
 });
+
+test("where Δ1 swings fast with Δ2 the twin roots are still both found: {R2, T_PT, t1, φ_PT}", () => {
+  // R1 20/101.37°, R2 4068.2/1.606°: the PI lies 2.4 from vertex V1, so the T_PT relation barely
+  // fixes Δ1 and Δ1 turns through 145° while Δ2 moves 0.2°; twins lie 0.001° apart in Δ2.
+  const [r1, r2, d1, d2] = [20, 4068.223210535051, 101.36755077217853, 1.6057581731074007];
+  const c = computeCompoundCurve({ radius1: r1, radius2: r2, delta1: d1, delta2: d2 });
+  const given = { radius2: r2, tangentPT: c.tangentPT, subTangent1: c.subTangent1, chordAnglePT: c.chordAnglePT };
+  const { solutions } = solveCompoundCurve(given);
+  expect(solutions.some((s) => sameCurve(s, r1, r2, d1, d2))).toBe(true);
+  expect(solutions.length).toBeGreaterThanOrEqual(2);
+  for (const s of solutions) expect(reproduces(s, given)).toBe(true);
+});
