@@ -53,6 +53,29 @@ function allFourSubsets(): (keyof CompoundGiven)[][] {
 
 const MIXED = allFourSubsets().flatMap((keys) => CURVES.map((c) => givenOf(c, keys)));
 
+// Curves whose common tangent is parallel to the long chord: R2 = R1(1 − cos Δ1)/(1 − cos Δ2).
+const PARALLEL_CURVES: CompoundCurve[] = [
+  [400, 36, 50],
+  [900, 30, 45],
+  [250, 60, 25],
+].map(([r1, d1, d2]) => {
+  const r2 = (r1! * (1 - Math.cos((d1! * Math.PI) / 180))) / (1 - Math.cos((d2! * Math.PI) / 180));
+  return computeCompoundCurve({ radius1: r1!, radius2: r2, delta1: d1!, delta2: d2! });
+});
+
+function parallelCase(name: string, keys: (keyof CompoundGiven)[]): BenchCase {
+  const inputs = PARALLEL_CURVES.map((c) => ({ ...givenOf(c, keys), commonTangentParallelToLongChord: true }));
+  return { name: `solve ${name}`, targetMs: 1, runs: 2000, run: (i) => void solveCompoundCurve(inputs[i % inputs.length]!) };
+}
+
+// Sets that leave both angles free after the closed forms: one item of each arc (R, t or L) and
+// two of T_PC, T_PT, LC and one chord angle (the parallel sets are timed above).
+const ARC_ITEMS = [["radius1", "subTangent1", "length1"], ["radius2", "subTangent2", "length2"]] as const;
+const TRIANGLE_PAIRS = [["tangentPC", "tangentPT"], ["tangentPC", "longChord"], ["tangentPT", "longChord"], ["tangentPC", "chordAnglePC"], ["tangentPC", "chordAnglePT"], ["tangentPT", "chordAnglePC"], ["tangentPT", "chordAnglePT"], ["longChord", "chordAnglePC"], ["longChord", "chordAnglePT"]] as const;
+const TWO_ANGLE = ARC_ITEMS[0].flatMap((a) => ARC_ITEMS[1].flatMap((b) => TRIANGLE_PAIRS.map((p) => [a, b, ...p] as (keyof CompoundGiven)[]))).flatMap((keys) =>
+  CURVES.map((c) => givenOf(c, keys)),
+);
+
 /** A 10.5 km metric line of 21 legs with 20 curves (every fourth compound), zig-zagging east. */
 export function makeTenKmAlignment(): AlignmentInput {
   const points: AlignmentInput["points"] = [{ x: 0, y: 0 }];
@@ -81,6 +104,15 @@ export const benchCases: BenchCase[] = [
   solveCase("{R1, R2, Δ, L1}", ["radius1", "radius2", "delta", "length1"]),
   solveCase("{R1, R2, Δ, LC} (numeric 1-D)", ["radius1", "radius2", "delta", "longChord"]),
   solveCase("{R1, R2, T_PC, T_PT} (numeric 2-D)", ["radius1", "radius2", "tangentPC", "tangentPT"]),
+  solveCase("{R1, T_PT, t2, LC} (numeric 2-D, reversed sweep)", ["radius1", "tangentPT", "subTangent2", "longChord"]),
+  solveCase("{T_PC, T_PT, L1, L2} (numeric 2-D, contour)", ["tangentPC", "tangentPT", "length1", "length2"]),
+  parallelCase("{T_PC, T_PT, R1, parallel} (numeric 2-D)", ["tangentPC", "tangentPT", "radius1"]),
+  {
+    name: "solve any two-angle set (81 sets × 5 curves)",
+    targetMs: 1,
+    runs: 3000,
+    run: (i) => void solveCompoundCurve(TWO_ANGLE[(i * 7919) % TWO_ANGLE.length]!),
+  },
   {
     name: "solve any 4-subset of knowns (mixed, errors included)",
     targetMs: 1,
