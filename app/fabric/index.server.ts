@@ -6,7 +6,7 @@
 export { FabricInputError, isFabricInputError, type FabricErrorCode } from "./errors";
 export type { AreaFeature, AreaGeometry, Properties, ReadOptions, ReadResult, RejectedRow, RepairedRow } from "./types";
 export { readParcelUpload } from "./upload/read-parcel-upload.server";
-export type { ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload/upload-types";
+export type { ParcelOverlap, ParcelUpload, ParcelUploadInput, UploadedFeature } from "./upload/upload-types";
 export { progressFraction, stageLabel, UPLOAD_STAGES, type ProgressSink, type UploadProgress, type UploadStage } from "./upload/progress";
 export { detectFormat, type FabricFormat } from "./upload/detect-format";
 export { readShapefileZip } from "./readers/shapefile-zip";

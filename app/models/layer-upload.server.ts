@@ -12,6 +12,8 @@ function summary(upload: ParcelUpload) {
     featureCount: upload.featureCount,
     rejected: upload.rejected,
     repaired: upload.repaired,
+    overlaps: upload.overlaps,
+    overlapCount: upload.overlapCount,
     warnings: upload.warnings,
     sourceCrs: crsCode(upload.sourceCrs),
     sourceCrsName: upload.sourceCrs.name,

@@ -6,13 +6,13 @@ import { CrsPicker } from "./crs-picker";
 import { DropZone } from "./drop-zone";
 import { FieldMapping, type Mapping } from "./field-mapping";
 import { UploadProgress } from "./progress-bar";
-import { RejectedRows, type RejectedRow, type RepairedRow } from "./rejected-rows";
+import { RejectedRows, type OverlapRow, type RejectedRow, type RepairedRow } from "./rejected-rows";
 import { SampleTable } from "./sample-table";
 import { sendWithProgress, type UploadPhase } from "./send-with-progress";
 
-type Preview = { fieldNames: string[]; sampleRows: Record<string, unknown>[]; mapping: Mapping; featureCount: number; rejected: RejectedRow[]; repaired: RepairedRow[]; warnings: string[]; sourceCrs: string };
+type Preview = { fieldNames: string[]; sampleRows: Record<string, unknown>[]; mapping: Mapping; featureCount: number; rejected: RejectedRow[]; repaired: RepairedRow[]; overlaps: OverlapRow[]; areaUnit: string; warnings: string[]; sourceCrs: string };
 type ApiError = { error: { code: string; message: string; details?: unknown } };
-type Step = { kind: "choose" } | { kind: "busy"; phase: UploadPhase } | { kind: "mapping"; preview: Preview } | { kind: "done"; count: number; rejected: RejectedRow[]; repaired: RepairedRow[]; warnings: string[] };
+type Step = { kind: "choose" } | { kind: "busy"; phase: UploadPhase } | { kind: "mapping"; preview: Preview } | { kind: "done"; count: number; rejected: RejectedRow[]; repaired: RepairedRow[]; overlaps: OverlapRow[]; areaUnit: string; warnings: string[] };
 
 function errorOf(body: unknown): ApiError["error"] {
   return (body as ApiError | null)?.error ?? { code: "internal", message: "The server gave no answer." };
@@ -73,8 +73,8 @@ export function LayerUpload({ projectId }: { projectId: number }) {
       setStep({ kind: "choose" });
       return;
     }
-    const body = answer.body as { featureCount: number; rejected: RejectedRow[]; repaired: RepairedRow[]; warnings: string[] };
-    setStep({ kind: "done", count: body.featureCount, rejected: body.rejected, repaired: body.repaired, warnings: body.warnings });
+    const body = answer.body as { featureCount: number; rejected: RejectedRow[]; repaired: RepairedRow[]; overlaps: OverlapRow[]; areaUnit: string; warnings: string[] };
+    setStep({ kind: "done", count: body.featureCount, rejected: body.rejected, repaired: body.repaired, overlaps: body.overlaps, areaUnit: body.areaUnit, warnings: body.warnings });
     revalidator.revalidate();
   };
 
@@ -102,7 +102,7 @@ export function LayerUpload({ projectId }: { projectId: number }) {
           <p className="text-sm">{step.preview.featureCount.toLocaleString()} features read, in {step.preview.sourceCrs}. Check which fields hold what, then load.</p>
           <FieldMapping fieldNames={step.preview.fieldNames} mapping={mapping} onChange={setMapping} featureIdOption />
           <SampleTable fieldNames={step.preview.fieldNames} rows={step.preview.sampleRows} mappedAs={Object.fromEntries(Object.entries(mapping).filter(([, v]) => v).map(([k, v]) => [v as string, k]))} />
-          <RejectedRows rows={step.preview.rejected} warnings={step.preview.warnings} repaired={step.preview.repaired} />
+          <RejectedRows rows={step.preview.rejected} warnings={step.preview.warnings} repaired={step.preview.repaired} overlaps={step.preview.overlaps} areaUnit={step.preview.areaUnit} />
           <div className="flex gap-2">
             <Button onClick={commit} disabled={kind === "parcels" && !mapping.parcelId}>Load {step.preview.featureCount.toLocaleString()} {kind}</Button>
             <Button variant="secondary" onClick={() => setStep({ kind: "choose" })}>Back</Button>
@@ -112,7 +112,7 @@ export function LayerUpload({ projectId }: { projectId: number }) {
       {step.kind === "done" && (
         <div role="status" className="space-y-2 rounded-md bg-action-tint px-4 py-3 text-sm">
           <p className="font-semibold">Loaded {step.count.toLocaleString()} {kind}.</p>
-          <RejectedRows rows={step.rejected} warnings={step.warnings} repaired={step.repaired} />
+          <RejectedRows rows={step.rejected} warnings={step.warnings} repaired={step.repaired} overlaps={step.overlaps} areaUnit={step.areaUnit} />
         </div>
       )}
     </div>

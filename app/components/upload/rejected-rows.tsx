@@ -3,6 +3,7 @@ import { Table } from "~/components/ui/table";
 
 export type RejectedRow = { row: number; reason: string };
 export type RepairedRow = { row: number; repairs: string[] };
+export type OverlapRow = { rows: [number, number]; parcelIds: [string | null, string | null]; area: number };
 
 function downloadCsv(header: string, lines: [number, string][], fileName: string) {
   const text = [header, ...lines.map(([row, note]) => `${row},"${note.replace(/"/g, '""')}"`)].join("\n") + "\n";
@@ -28,11 +29,13 @@ function RowNotes({ title, noun, header, lines, fileName }: { title: string; nou
   );
 }
 
+const overlapNote = (o: OverlapRow, unit: string) => `overlaps row ${o.rows[1]} (${o.parcelIds[0] ?? "?"} / ${o.parcelIds[1] ?? "?"}) by ${o.area.toFixed(2)} ${unit}²`;
+
 /**
- * Rows the checks refused, with the reasons, and rows kept after a safe geometry repair, with
- * what was done; both downloadable so they can be fixed at the source.
+ * Rows the checks refused, with the reasons; rows kept after a safe geometry repair, with what
+ * was done; parcels that overlap (a warning: they are loaded). All downloadable, to be fixed at the source.
  */
-export function RejectedRows({ rows, warnings, repaired = [] }: { rows: RejectedRow[]; warnings: string[]; repaired?: RepairedRow[] }) {
+export function RejectedRows({ rows, warnings, repaired = [], overlaps = [], areaUnit = "m" }: { rows: RejectedRow[]; warnings: string[]; repaired?: RepairedRow[]; overlaps?: OverlapRow[]; areaUnit?: string }) {
   return (
     <div className="space-y-3">
       {warnings.length > 0 && (
@@ -42,6 +45,7 @@ export function RejectedRows({ rows, warnings, repaired = [] }: { rows: Rejected
       )}
       <RowNotes title="refused" noun="Reason" header="row,reason" lines={rows.map((r) => [r.row, r.reason])} fileName="refused-rows.csv" />
       <RowNotes title="repaired and kept" noun="Repair" header="row,repair" lines={repaired.map((r) => [r.row, r.repairs.join("; ")])} fileName="repaired-rows.csv" />
+      <RowNotes title="overlapping another parcel (largest first)" noun="Overlap" header="row,overlap" lines={overlaps.map((o) => [o.rows[0], overlapNote(o, areaUnit)])} fileName="overlapping-parcels.csv" />
     </div>
   );
 }

@@ -81,6 +81,6 @@ export function repairGeometry<G extends AreaGeometry>(geometry: G, options: { c
   const counts: RingRepairs = { closed: 0, repeated: 0, spikes: 0, reversed: 0 };
   const polygon = (rings: Position[][]) => (Array.isArray(rings) ? rings.map((r, i) => repairRing(r, counts, i === 0, options.checkWinding ?? false)) : rings);
   const coordinates = geometry.type === "Polygon" ? polygon(geometry.coordinates) : Array.isArray(geometry.coordinates) ? geometry.coordinates.map(polygon) : geometry.coordinates;
-  const repairs = describe(counts);
-  return { geometry: repairs.length ? ({ ...geometry, coordinates } as G) : geometry, repairs };
+  if (counts.closed + counts.repeated + counts.spikes + counts.reversed === 0) return { geometry, repairs: [] };
+  return { geometry: { ...geometry, coordinates } as G, repairs: describe(counts) };
 }

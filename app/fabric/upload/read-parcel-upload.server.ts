@@ -10,6 +10,7 @@ import { readGeoJson } from "../readers/geojson";
 import { readGeoPackage } from "../readers/geopackage.server";
 import { mapFeatureAttributes, settleFieldMapping, type MappedAttributes } from "../attributes/apply-mapping";
 import { mapInChunks, yieldToEventLoop } from "./chunked.server";
+import { findParcelOverlaps } from "./parcel-overlaps.server";
 import { findCrsByCode } from "../crs/epsg-list";
 import { geometryConverter } from "../crs/reproject";
 import type { ResolvedCrs } from "../crs/resolve-crs";
@@ -96,8 +97,11 @@ export async function readParcelUpload(input: ParcelUploadInput): Promise<Parcel
   const areaUnit = input.areaUnit ?? workingCrs.unit!;
   const toWorking = geometryConverter(sourceCrs.proj4, workingCrs.proj4);
   const features = await mapInChunks(mapped, (m, i) => toUploaded(m.feature, m.attributes, wgs84[i]!, toWorking, workingCrs, areaUnit), "coordinates", half(n));
+  const overlaps = input.kind === "parcels" ? await findParcelOverlaps(features, workingCrs.unit!, areaUnit, report) : { overlaps: [], overlapCount: 0, warning: null };
+  if (overlaps.warning) warnings.push(overlaps.warning);
   return {
     format, features, featureCount: features.length,
+    overlaps: overlaps.overlaps, overlapCount: overlaps.overlapCount,
     rejected: [...read.rejected, ...rejected].sort((a, b) => a.row - b.row),
     repaired: keptRows(read.repaired, features),
     warnings, sourceCrs, workingCrs, areaUnit, bbox,

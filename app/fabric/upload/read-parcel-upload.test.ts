@@ -126,3 +126,22 @@ test("building footprints need no parcel ID and may share one", async () => {
   expect(up.features.map((f) => f.parcelId)).toEqual(["QM-001", "QM-001", null]);
   expect(up.rejected).toEqual([]);
 });
+
+test("overlapping parcels are listed by row and parcel ID with the overlap's area, largest first, and warned about", async () => {
+  // Invented lots in EPSG:32617 metres (legacy GeoJSON crs member): B overlaps A by 2 m × 30 m; C overlaps B by 0.01 m × 30 m (0.3 m², not reported).
+  const lot = (id: string, x: number) => ({ type: "Feature", properties: { APN: id }, geometry: { type: "Polygon", coordinates: [[[x, 4_400_000], [x + 20, 4_400_000], [x + 20, 4_400_030], [x, 4_400_030], [x, 4_400_000]]] } });
+  const doc = { type: "FeatureCollection", crs: { type: "name", properties: { name: "urn:ogc:def:crs:EPSG::32617" } }, features: [lot("QM-A", 540_000), lot("QM-B", 540_018), lot("QM-C", 540_037.99), lot("QM-D", 540_100), lot("QM-E", 540_100.5)] };
+  const bytes = new TextEncoder().encode(JSON.stringify(doc));
+  const up = await readParcelUpload({ fileName: "lots.geojson", bytes, kind: "parcels", workingCrs: "EPSG:32617", areaUnit: "m" });
+  // Closed forms: D and E overlap by 19.5 × 30 = 585 m², A and B by 2 × 30 = 60 m².
+  expect(up.overlapCount).toBe(2);
+  expect(up.overlaps.map((o) => [o.rows, o.parcelIds])).toEqual([[[4, 5], ["QM-D", "QM-E"]], [[1, 2], ["QM-A", "QM-B"]]]);
+  expect(up.overlaps[0]!.area).toBeCloseTo(585, 6);
+  expect(up.overlaps[1]!.area).toBeCloseTo(60, 6);
+  expect(up.warnings.join(" ")).toMatch(/^2 pairs of parcels overlap by more than 0\.5 m² \(largest: rows 4 and 5, 585\.00 m²\)/);
+  const inFeet = await readParcelUpload({ fileName: "lots.geojson", bytes, kind: "parcels", workingCrs: "EPSG:32617", areaUnit: "usft" });
+  // 1 US survey ft = 1200/3937 m (NIST SP 811 / NGS), so 60 m² = 60 / (1200/3937)² ft².
+  expect(inFeet.overlaps[1]!.area).toBeCloseTo(60 / (1200 / 3937) ** 2, 6);
+  const asBuildings = await readParcelUpload({ fileName: "lots.geojson", bytes, kind: "buildings", workingCrs: "EPSG:32617" });
+  expect(asBuildings.overlapCount).toBe(0);
+});

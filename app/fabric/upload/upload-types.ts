@@ -41,6 +41,13 @@ export interface UploadedFeature extends MappedAttributes {
   area: number;
 }
 
+/** Two parcels whose interiors overlap, by source row and parcel ID, with the overlap's area in `areaUnit`². */
+export interface ParcelOverlap {
+  rows: [number, number];
+  parcelIds: [string | null, string | null];
+  area: number;
+}
+
 /** A read, checked upload, ready to store. */
 export interface ParcelUpload {
   format: FabricFormat;
@@ -49,6 +56,10 @@ export interface ParcelUpload {
   rejected: RejectedRow[];
   /** Accepted rows whose geometry was safely repaired, with what was done. */
   repaired: RepairedRow[];
+  /** Overlapping parcel pairs (largest first, at most MAX_LISTED_OVERLAPS); none for buildings. */
+  overlaps: ParcelOverlap[];
+  /** How many pairs overlap in all. */
+  overlapCount: number;
   warnings: string[];
   sourceCrs: ResolvedCrs;
   workingCrs: ResolvedCrs;
