@@ -4,6 +4,7 @@ import { FabricLayers } from "./fabric-layers";
 import { browserMapLib, markMapReady } from "./map-lib";
 import { MapLegend } from "./map-legend";
 import { ParcelCard, type ParcelSummary } from "./parcel-card";
+import { searchParcelLayers } from "./parcel-search";
 import type { ParcelColouring } from "./parcel-styles";
 import { MapToolbar } from "./map-toolbar";
 
@@ -38,8 +39,9 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
     setHover(f && typeof f.id === "number" ? { source: f.source, id: f.id } : null);
   };
   const onClick = (e: MapLayerMouseEvent) => {
+    // Overview cells (zoom ≤ 12) stand for many parcels and carry no parcel ID: no card for them.
     const p = e.features?.[0]?.properties;
-    setSelected(p ? { parcelId: String(p.parcelId), owner: p.owner, address: p.address, landUse: p.landUse, area: Number(p.area), landValue: p.landValue === undefined ? undefined : Number(p.landValue) } : null);
+    setSelected(p?.parcelId !== undefined ? { parcelId: String(p.parcelId), owner: p.owner, address: p.address, landUse: p.landUse, area: Number(p.area), landValue: p.landValue === undefined ? undefined : Number(p.landValue) } : null);
   };
   const zoomTo = (layer?: MapLayerInfo) => {
     const b = layer?.bbox ?? bounds;
@@ -55,8 +57,8 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
         colouring={colouring}
         onColouring={setColouring}
         onZoomTo={zoomTo}
-        onFound={(p, at) => { setSelected(p); mapRef.current?.flyTo({ center: at, zoom: 17 }); }}
-        search={(q) => searchRendered(mapRef.current, q)}
+        onFound={(hit) => { setSelected(hit.parcel); mapRef.current?.fitBounds([[hit.bbox[0], hit.bbox[1]], [hit.bbox[2], hit.bbox[3]]], { padding: 80, maxZoom: 18, duration: 800 }); }}
+        search={(q) => searchParcelLayers(parcelLayers.map((l) => l.id), q)}
       />
       <div className="relative h-[560px] overflow-hidden rounded-lg border border-rule" data-testid="project-map">
         <Map
@@ -81,23 +83,4 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
       </div>
     </div>
   );
-}
-
-/** Finds parcels by ID or owner among the tiles already loaded (the whole fabric at the overview zoom). */
-function searchRendered(map: MapRef | null, query: string): { parcel: ParcelSummary; at: [number, number] }[] {
-  const m = map?.getMap();
-  const q = query.trim().toLowerCase();
-  if (!m || q.length < 2) return [];
-  const found = new globalThis.Map<string, { parcel: ParcelSummary; at: [number, number] }>();
-  for (const source of Object.keys(m.getStyle().sources).filter((s) => s.startsWith("layer-"))) {
-    for (const f of m.querySourceFeatures(source, { sourceLayer: "parcels" })) {
-      const p = f.properties ?? {};
-      if (!String(p.parcelId).toLowerCase().includes(q) && !String(p.owner ?? "").toLowerCase().includes(q)) continue;
-      const ring = f.geometry.type === "Polygon" ? f.geometry.coordinates[0] : f.geometry.type === "MultiPolygon" ? f.geometry.coordinates[0]?.[0] : undefined;
-      const at = (ring?.[0] ?? [0, 0]) as [number, number];
-      found.set(String(p.parcelId), { parcel: { parcelId: String(p.parcelId), owner: p.owner, address: p.address, landUse: p.landUse, area: Number(p.area), landValue: Number(p.landValue) }, at });
-      if (found.size >= 20) return [...found.values()];
-    }
-  }
-  return [...found.values()];
 }
