@@ -92,3 +92,11 @@ test("safe repairs keep a row and say what was done; a self-intersecting row is 
   expect(r.rejected).toEqual([{ row: 3, reason: expect.stringMatching(/self-intersects/) }]);
   expect(r.features[1]!.geometry.coordinates[0]).toHaveLength(5);
 });
+
+test("rings wound against RFC 7946 are noted in RFC 7946 files, not in 2008-style files with a crs member", () => {
+  const cw = [[0, 0], [0, 10], [10, 10], [10, 0], [0, 0]];
+  const feature = { type: "Feature", properties: { PIN: "Q-9" }, geometry: { type: "Polygon", coordinates: [cw] } };
+  expect(readGeoJson(utf8({ type: "FeatureCollection", features: [feature] })).repaired).toEqual([{ row: 1, repairs: ["turned 1 ring to RFC 7946 winding (exterior counter-clockwise, holes clockwise)"] }]);
+  const legacy = { type: "FeatureCollection", crs: { type: "name", properties: { name: "EPSG:32617" } }, features: [feature] };
+  expect(readGeoJson(utf8(legacy)).repaired).toEqual([]);
+});

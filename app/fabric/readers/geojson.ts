@@ -50,8 +50,9 @@ export function readGeoJson(bytes: Uint8Array): ReadResult {
     if (typeof f?.id === "string" || typeof f?.id === "number") row.id = f.id;
     return row;
   });
-  // RFC 7946 §3.1.6: exterior rings counter-clockwise, holes clockwise.
-  const collected = collectFeatures(rows, { checkWinding: true });
+  // RFC 7946 §3.1.6: exterior rings counter-clockwise, holes clockwise. A file with the older
+  // `crs` member follows the 2008 GeoJSON spec, which set no winding, so its rings are not noted.
+  const collected = collectFeatures(rows, { checkWinding: doc.crs === undefined });
   const result: ReadResult = { ...collected, fieldNames: fieldNamesOf(rows), warnings: [...warnings, ...collected.warnings] };
   if (sourceEpsg !== undefined) result.sourceEpsg = sourceEpsg;
   return result;
