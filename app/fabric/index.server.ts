@@ -22,5 +22,5 @@ export { polygonArea, ringArea } from "./geometry/area";
 export { FEATURE_ID_SOURCE, TARGET_ATTRIBUTES, guessFieldMapping, type FieldMapping, type TargetAttribute } from "./attributes/field-mapping";
 export { applyFieldMapping, mapFeatureAttributes, settleFieldMapping, type LandValueBasis, type MappedAttributes } from "./attributes/apply-mapping";
 export { encodeTileFeatures, isTileInPyramid, sliceTile, tileBoundsWgs84, TILE_EXTENT, type TileFeature } from "./tiles/vector-tiles";
-export { indexOverview, overviewTile, worldXY, type OverviewIndex, type OverviewItem, type OverviewOptions, type OverviewProperties, type OverviewTile } from "./tiles/overview";
+export { countInTile, indexOverview, overviewTile, worldXY, type OverviewIndex, type OverviewItem, type OverviewOptions, type OverviewProperties, type OverviewTile } from "./tiles/overview";
 export { TileCache, type CachedTile } from "./tiles/tile-cache";

@@ -1,15 +1,23 @@
 import { createHash } from "node:crypto";
-import { encodeTileFeatures, indexOverview, isTileInPyramid, overviewTile, sliceTile, TileCache, tileBoundsWgs84, type CachedTile, type OverviewIndex, type TileFeature } from "~/fabric/index.server";
+import { countInTile, encodeTileFeatures, indexOverview, isTileInPyramid, overviewTile, sliceTile, TileCache, tileBoundsWgs84, type CachedTile, type OverviewIndex, type TileFeature } from "~/fabric/index.server";
 import { db, type Db } from "~/utils/db.server";
 import { workingProj4 } from "./layer-envelope.server";
 import { overviewItems, tileFeaturesById, tileFeaturesInBox } from "./layer-tile-sources.server";
 import type { Layer } from "./layers.server";
 
 /**
- * Zooms up to this one draw the generalised overview (small parcels coalesced into 4-px cells,
- * see `overviewTile`); deeper zooms draw every parcel. At z12 a 20 m lot is under 2 px across.
+ * Zooms up to this one may draw the generalised overview (small parcels coalesced into 4-px
+ * cells, see `overviewTile`); deeper zooms draw every parcel. At z12 a 20 m lot is under 2 px.
  */
 export const OVERVIEW_MAX_ZOOM = 12;
+/**
+ * An overview tile that would hold no more features than this draws every feature spanning 8
+ * tile units (1 px) or more exactly, and coalesces only smaller ones, which geojson-vt would
+ * drop: about 150 ms of slicing and encoding (scripts/bench-fabric.ts). So a town-sized layer
+ * keeps its parcels at the zoom that shows the town, and only a dense county is generalised.
+ */
+export const OVERVIEW_EXACT_BUDGET = 8000;
+const EXACT_KEEP_UNITS = 8;
 /** Layers whose overview index stays in memory; the least recently used is dropped past this. */
 const MAX_OVERVIEW_LAYERS = 8;
 /** Encoded tiles kept, by bytes, across all layers. */
@@ -30,7 +38,9 @@ function overviewFor(layer: Layer, working: string | undefined, tx: Db): Overvie
 /** The features of tile z/x/y: every feature at detail zooms; cells plus the large features at overview zooms. */
 function tileFeatures(layer: Layer, working: string | undefined, z: number, x: number, y: number, tx: Db): TileFeature[] {
   if (z > OVERVIEW_MAX_ZOOM) return sliceTile(tileFeaturesInBox(layer, working, tileBoundsWgs84(z, x, y), tx), z, x, y);
-  const { cells, wholeIds } = overviewTile(overviewFor(layer, working, tx), z, x, y);
+  const index = overviewFor(layer, working, tx);
+  const keepUnits = countInTile(index, z, x, y) <= OVERVIEW_EXACT_BUDGET ? EXACT_KEEP_UNITS : undefined;
+  const { cells, wholeIds } = overviewTile(index, z, x, y, keepUnits === undefined ? {} : { keepUnits });
   return [...cells, ...sliceTile(tileFeaturesById(layer, wholeIds, tx), z, x, y)];
 }
 

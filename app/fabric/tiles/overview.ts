@@ -41,6 +41,18 @@ export function indexOverview(items: OverviewItem[]): OverviewIndex {
   return { items, tree };
 }
 
+/** The search box of tile z/x/y plus its buffer, in world units. */
+function tileSearchBox(z: number, x: number, y: number): [number, number, number, number] {
+  const n = 2 ** z;
+  const pad = TILE_BUFFER / (n * TILE_EXTENT);
+  return [x / n - pad, y / n - pad, (x + 1) / n + pad, (y + 1) / n + pad];
+}
+
+/** How many items' bounds meet tile z/x/y or its buffer: what drawing the tile exactly would hold. */
+export function countInTile(index: OverviewIndex, z: number, x: number, y: number): number {
+  return index.tree ? index.tree.search(...tileSearchBox(z, x, y)).length : 0;
+}
+
 interface Cell { i: number; j: number; count: number; area: number; value: number; valued: boolean; useArea: Map<string, number> }
 
 function addToCell(cell: Cell, p: OverviewProperties): void {
@@ -74,11 +86,9 @@ export function overviewTile(index: OverviewIndex, z: number, x: number, y: numb
   if (!Number.isInteger(TILE_EXTENT / cellUnits)) throw new RangeError(`cellUnits must divide ${TILE_EXTENT}, got ${cellUnits}`);
   const result: OverviewTile = { cells: [], wholeIds: [] };
   if (!index.tree) return result;
-  const n = 2 ** z;
-  const scale = n * TILE_EXTENT;
-  const pad = TILE_BUFFER / scale;
+  const scale = 2 ** z * TILE_EXTENT;
   const cells = new Map<number, Cell>();
-  for (const k of index.tree.search(x / n - pad, y / n - pad, (x + 1) / n + pad, (y + 1) / n + pad)) {
+  for (const k of index.tree.search(...tileSearchBox(z, x, y))) {
     const it = index.items[k]!;
     if (Math.max(it.x1 - it.x0, it.y1 - it.y0) * scale >= keepUnits) { result.wholeIds.push(it.id); continue; }
     // Tile-local position of the centre in tile units; outside 0..extent it belongs to a neighbour.
