@@ -3,22 +3,7 @@ import { readImpacts } from "./alternative-impacts.server";
 import { listAlternatives, type Alternative } from "./alternatives.server";
 import type { Project } from "./projects.server";
 import type { AlternativeSummary } from "~/calculations/alternative-summary";
-
-export interface ComparisonCell {
-  alternativeId: number;
-  takeArea: number;
-  classification: "partial" | "full";
-  estimatedCost: number;
-}
-
-export interface ComparisonRow {
-  parcelId: string;
-  owner: string | null;
-  address: string | null;
-  parcelArea: number;
-  /** One cell per alternative that takes land from this parcel. */
-  takes: ComparisonCell[];
-}
+import type { ComparisonRow } from "~/calculations/comparison-rows";
 
 export interface Comparison {
   units: string;

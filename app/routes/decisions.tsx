@@ -3,7 +3,7 @@ import type { Route } from "./+types/decisions";
 import { ProgressPanel } from "~/components/decisions/progress-panel";
 import { Card } from "~/components/ui/card";
 import { Notice } from "~/components/ui/notice";
-import { formatDay } from "~/components/work/figures";
+import { formatDay } from "~/components/parcel-work/figures";
 import { listDecisionOverview } from "~/models/decision-overview.server";
 import { ACCESS } from "~/utils/access";
 import { requireUser } from "~/utils/permissions.server";

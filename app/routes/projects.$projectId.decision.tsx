@@ -9,7 +9,7 @@ import { TransitionHistory } from "~/components/decisions/transition-history";
 import { buttonClass } from "~/components/ui/button";
 import { Card } from "~/components/ui/card";
 import { Notice } from "~/components/ui/notice";
-import { formatDay } from "~/components/work/figures";
+import { formatDay } from "~/components/parcel-work/figures";
 import { readAcquisitionProgress } from "~/models/acquisition-progress.server";
 import { listProjectTransitions } from "~/models/alternative-transitions.server";
 import { findAlternativeForUser } from "~/models/alternatives.server";

@@ -1,4 +1,7 @@
 import type { AlternativeSummary } from "~/components/alternatives/api-types";
+import type { ComparisonCell, ComparisonRow } from "~/calculations/comparison-rows";
+
+export type { ComparisonCell, ComparisonRow };
 
 /** `GET /api/v1/projects/:projectId/comparison` (and the comparison page's loader), as the browser reads it. */
 export interface ComparisonAlternative {
@@ -8,21 +11,6 @@ export interface ComparisonAlternative {
   status: string;
   version: number;
   summary: AlternativeSummary;
-}
-
-export interface ComparisonCell {
-  alternativeId: number;
-  takeArea: number;
-  classification: "partial" | "full";
-  estimatedCost: number;
-}
-
-export interface ComparisonRow {
-  parcelId: string;
-  owner: string | null;
-  address: string | null;
-  parcelArea: number;
-  takes: ComparisonCell[];
 }
 
 export interface ComparisonJson {

@@ -1,7 +1,7 @@
 import { Link } from "react-router";
 import type { AlternativeState } from "~/calculations/alternative-lifecycle";
 import { Table } from "~/components/ui/table";
-import { areaLabel, formatArea, formatEstimate, type Units } from "~/components/work/figures";
+import { areaLabel, formatArea, formatEstimate, type Units } from "../parcel-work/figures";
 import { LifecycleBadge } from "./lifecycle-badge";
 
 export interface SummaryRow {

@@ -6,7 +6,7 @@ import type { ParcelCaseDrawing } from "~/components/map/parcel-case-map";
 import type { MapLayerInfo } from "~/components/map/project-map";
 import { Button } from "~/components/ui/button";
 import { SelectField } from "~/components/ui/field";
-import type { Units } from "~/components/work/figures";
+import type { Units } from "../parcel-work/figures";
 import { AssignmentTable, type AssignableCase } from "./assignment-table";
 import { StationRangePicker } from "./station-range-picker";
 

@@ -1,8 +1,8 @@
 import type { AcquisitionStatus } from "~/calculations/acquisition-status";
 import { formatStationRange } from "~/calculations/parcel-list-csv";
 import { Table } from "~/components/ui/table";
-import { areaLabel, formatArea, formatEstimate, type Units } from "~/components/work/figures";
-import { StatusBadge } from "~/components/work/status-badge";
+import { areaLabel, formatArea, formatEstimate, type Units } from "../parcel-work/figures";
+import { StatusBadge } from "~/components/parcel-work/status-badge";
 
 export interface AssignableCase {
   caseId: number;

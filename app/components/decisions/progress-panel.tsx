@@ -1,5 +1,5 @@
 import { ACQUISITION_LABELS, ACQUISITION_STATUSES, type AcquisitionStatus } from "~/calculations/acquisition-status";
-import { formatEstimate } from "~/components/work/figures";
+import { formatEstimate } from "~/components/parcel-work/figures";
 
 export interface ProgressData {
   parcels: number;

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { parseStation, stationStyleForUnits } from "~/geometry/stations";
 import { Button } from "~/components/ui/button";
-import type { Units } from "~/components/work/figures";
+import type { Units } from "~/components/parcel-work/figures";
 
 /** Two stations (e.g. "1+200" or 1200) and a button that selects the parcels whose take overlaps them. */
 export function StationRangePicker({ units, onPick }: { units: Units; onPick: (from: number, to: number) => void }) {

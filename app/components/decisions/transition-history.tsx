@@ -1,5 +1,5 @@
 import { ACTION_LABELS, type LifecycleAction } from "~/calculations/alternative-lifecycle";
-import { formatMoment } from "~/components/work/figures";
+import { formatMoment } from "~/components/parcel-work/figures";
 
 export interface TransitionItem {
   id: number;
