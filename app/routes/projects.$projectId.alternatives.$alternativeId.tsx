@@ -37,8 +37,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     layers,
     basemapStyleUrl: env().BASEMAP_STYLE_URL,
     crsDefinition: code === null ? null : (findCrsByCode(code)?.proj4 ?? null),
-    // Approved versions are frozen (the API refuses to change them), so they open read only.
-    editable: mayOpen(user.role, "editAlternatives") && alternative.status !== "approved",
+    // A submission awaiting a decision cannot change (the API answers 409); an approved version
+    // stays frozen on record and an edit saves as the next draft version.
+    editable: mayOpen(user.role, "editAlternatives") && alternative.status !== "submitted",
   };
 }
 

@@ -35,11 +35,16 @@ export function EditorHeader({ alternative, projectId, projectName, editable, ed
         </div>
       </div>
       {alternative.description && <p className="text-ink-soft">{alternative.description}</p>}
+      {editable && alternative.status === "approved" && (
+        <p className="text-sm text-ink-soft" data-testid="approved-note">
+          Version {alternative.version} is the approved one and stays on record as it is; any change you make saves as a new draft version.
+        </p>
+      )}
       {editable ? (
         <SaveStatus state={save} onRetry={onRetry} />
       ) : (
         <p className="text-sm text-ink-soft" data-testid="read-only">
-          {alternative.status === "approved" ? "This version is approved and frozen: it is shown read only." : "You are viewing this alternative; only planners edit it."} Version {alternative.version}.
+          {alternative.status === "submitted" ? "This version awaits a decision; withdraw the submission to change it." : "You are viewing this alternative; only planners edit it."} Version {alternative.version}.
         </p>
       )}
     </div>
