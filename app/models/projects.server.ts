@@ -1,4 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
+import { resolveTakeRules } from "~/calculations/take-rules";
+import type { LengthUnit } from "~/geometry/units";
 import { projectMembers, projects, users } from "~/db/schema";
 import { db, type Db } from "~/utils/db.server";
 import { recordAuditEvent } from "./audit.server";
@@ -74,7 +76,15 @@ export function removeProjectMember(projectId: number, userId: number, tx: Db = 
   tx.delete(projectMembers).where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, userId))).run();
 }
 
-/** The project as the API shows it. */
+/**
+ * The project as the API shows it: `takeRules` are the project's own (areas and per-area rates in
+ * its units), `resolvedTakeRules` the rules in effect (defaults, then the project's).
+ */
 export function toProjectJson(p: Project) {
-  return { id: p.id, name: p.name, description: p.description, units: p.units, crs: p.crs, scaleFactor: p.scaleFactor, createdBy: p.createdBy, createdAt: p.createdAt.toISOString() };
+  return {
+    id: p.id, name: p.name, description: p.description, units: p.units, crs: p.crs, scaleFactor: p.scaleFactor,
+    takeRules: p.takeRules ?? {},
+    resolvedTakeRules: resolveTakeRules(p.units as LengthUnit, p.takeRules),
+    createdBy: p.createdBy, createdAt: p.createdAt.toISOString(),
+  };
 }

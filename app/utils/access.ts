@@ -7,6 +7,8 @@ import type { Role } from "./roles";
 export const ACCESS = {
   projects: ["admin", "planner", "manager", "analyst"],
   createProject: ["planner"],
+  // A project's take and cost rules (PATCH /api/v1/projects/:id and the project page's rules card).
+  editProjectRules: ["planner", "admin"],
   editAlternatives: ["planner"],
   takesApi: ["admin", "planner", "manager", "analyst"],
   workList: ["agent"],
