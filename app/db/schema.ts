@@ -111,6 +111,13 @@ export type MailAttachment = { filename: string; contentType: string; content: s
 export type BboxWgs84 = [number, number, number, number];
 
 /**
+ * A note the upload checks left on a stored layer (issue 4): two parcels that overlap, a row whose
+ * geometry was safely repaired, or a note about the file as a whole (rows and parcel IDs empty).
+ * `rows` are 1-based source rows; `area` is the overlap in the project's units squared.
+ */
+export type LayerWarning = { kind: "overlap" | "repair" | "file"; rows: number[]; parcelIds: (string | null)[]; reason: string; area?: number };
+
+/**
  * One uploaded parcel or building layer. Layers are never edited: a new upload
  * replaces the old one (status `replaced`, kept for history and audit).
  */
@@ -128,6 +135,8 @@ export const layers = sqliteTable(
     fieldMapping: text("field_mapping", { mode: "json" }).$type<Record<string, string | null>>().notNull(),
     featureCount: integer("feature_count").notNull(),
     bbox: text("bbox", { mode: "json" }).$type<BboxWgs84>().notNull(),
+    // The upload's overlap warnings, repair notes and file notes; null for layers stored before they were kept.
+    warnings: text("warnings", { mode: "json" }).$type<LayerWarning[]>(),
     status: text("status", { enum: ["active", "replaced"] }).notNull().default("active"),
     replacedByLayerId: integer("replaced_by_layer_id"),
     createdBy: integer("created_by").references(() => users.id),

@@ -5,7 +5,7 @@ import { db, type Db } from "~/utils/db.server";
 import { recordAuditEvent } from "./audit.server";
 import { insertLayerFeatures } from "./layer-feature-insert.server";
 export { boundsOf } from "./layer-feature-insert.server";
-import { findReplaceableLayer, type Layer, type LayerKind } from "./layers.server";
+import { findReplaceableLayer, layerWarningsOf, type Layer, type LayerKind } from "./layers.server";
 import type { Project } from "./projects.server";
 
 /** Why a checked upload could not be stored; the route answers 409 and nothing is kept. */
@@ -31,9 +31,10 @@ function settleWorkingCrs(t: Db, projectId: number, workingCrs: string): void {
 }
 
 /**
- * Stores a checked upload as one transaction: the layer row, every feature (R*Tree rows follow
- * by trigger), the working CRS when the project had none, the replaced layer's status, the
- * project's fabric-change time (stale impacts) and the audit event. Any failure stores nothing.
+ * Stores a checked upload as one transaction: the layer row (with the upload's warnings), every
+ * feature (R*Tree rows follow by trigger), the working CRS when the project had none, the replaced
+ * layer's status, the project's fabric-change time (stale impacts) and the audit event. Any
+ * failure stores nothing.
  */
 export function ingestLayer(project: Project, user: { id: number }, meta: LayerMeta, upload: ParcelUpload, tx: Db = db()): Layer {
   return tx.transaction((t) => {
@@ -46,7 +47,7 @@ export function ingestLayer(project: Project, user: { id: number }, meta: LayerM
       .insert(layers)
       .values({
         projectId: project.id, kind: meta.kind, name: meta.name, sourceFileName: meta.sourceFileName, format: upload.format,
-        sourceCrs: crsCode(upload.sourceCrs), fieldMapping: upload.mapping, featureCount: upload.featureCount, bbox: upload.bbox, createdBy: user.id,
+        sourceCrs: crsCode(upload.sourceCrs), fieldMapping: upload.mapping, featureCount: upload.featureCount, bbox: upload.bbox, warnings: layerWarningsOf(upload), createdBy: user.id,
       })
       .returning()
       .get();

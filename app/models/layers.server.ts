@@ -1,5 +1,6 @@
 import { and, asc, desc, eq } from "drizzle-orm";
-import { layers, projectMembers, projects } from "~/db/schema";
+import { layers, projectMembers, projects, type LayerWarning } from "~/db/schema";
+import type { ParcelUpload } from "~/fabric/index.server";
 import { db, type Db } from "~/utils/db.server";
 import type { Role } from "~/utils/roles";
 
@@ -30,6 +31,22 @@ export function findReplaceableLayer(projectId: number, layerId: number, tx: Db 
   return tx.select().from(layers).where(and(eq(layers.id, layerId), eq(layers.projectId, projectId), eq(layers.status, "active"))).get();
 }
 
+const areaLabel = (unit: ParcelUpload["areaUnit"]) => (unit === "m" ? "m²" : unit === "ft" ? "ft²" : "US ft²");
+
+/**
+ * What the upload checks found about a layer that was still loaded, kept with it: file notes first,
+ * then each listed overlap (largest first, as the check lists them), then each repaired row.
+ */
+export function layerWarningsOf(upload: Pick<ParcelUpload, "warnings" | "overlaps" | "repaired" | "features" | "areaUnit">): LayerWarning[] {
+  const idOfRow = new Map(upload.features.map((f) => [f.sourceRow, f.parcelId]));
+  const unit = areaLabel(upload.areaUnit);
+  return [
+    ...upload.warnings.map((reason): LayerWarning => ({ kind: "file", rows: [], parcelIds: [], reason })),
+    ...upload.overlaps.map((o): LayerWarning => ({ kind: "overlap", rows: [...o.rows], parcelIds: [...o.parcelIds], area: o.area, reason: `the two parcels overlap by ${o.area.toFixed(2)} ${unit}` })),
+    ...upload.repaired.map((r): LayerWarning => ({ kind: "repair", rows: [r.row], parcelIds: [idOfRow.get(r.row) ?? null], reason: r.repairs.join("; ") })),
+  ];
+}
+
 /** The layer as the API shows it. */
 export function toLayerJson(layer: Layer) {
   return {
@@ -48,5 +65,8 @@ export function toLayerJson(layer: Layer) {
     createdBy: layer.createdBy,
     createdAt: layer.createdAt.toISOString(),
     replacedAt: layer.replacedAt?.toISOString() ?? null,
+    // null: stored before warnings were kept with the layer (nothing known), not "none".
+    warnings: layer.warnings ?? null,
+    warningCount: layer.warnings?.length ?? null,
   };
 }
