@@ -5,8 +5,11 @@ import { Button, buttonClass } from "~/components/ui/button";
 import { Card } from "~/components/ui/card";
 import { Field, SelectField } from "~/components/ui/field";
 import { Table } from "~/components/ui/table";
+import { LayerList } from "~/components/projects/layer-list";
+import { TakeRulesForm } from "~/components/projects/take-rules-form";
 import { recordAuditEvent } from "~/models/audit.server";
 import { findProjectForUser, listProjectMembers, removeProjectMember, upsertProjectMember } from "~/models/projects.server";
+import { describeProjectRules, readTakeRulesForm, saveProjectTakeRules } from "~/models/project-rules.server";
 import { findUserByEmail } from "~/models/users.server";
 import { EmailSchema } from "~/schemas/account-schemas";
 import { ACCESS } from "~/utils/access";
@@ -31,6 +34,8 @@ const MemberChangeSchema = z.discriminatedUnion("intent", [
 ]);
 
 const ParamsSchema = z.object({ projectId: z.coerce.number().int().positive() });
+/** The page lists at most this many warnings per layer; the CSV download has them all. */
+const WARNINGS_SHOWN = 200;
 
 async function loadProject(request: Request, params: unknown, roles: readonly Role[]) {
   const user = await requireUser(request, { roles });
@@ -46,18 +51,28 @@ export function meta({ data: d }: Route.MetaArgs) {
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { user, project } = await loadProject(request, params, ACCESS.projects);
-  const layers = listProjectLayers(project.id)
-    .filter((l) => l.status === "active")
-    .map((l) => ({ id: l.id, kind: l.kind, name: l.name, bbox: l.bbox, featureCount: l.featureCount, sourceCrs: l.sourceCrs }));
   return {
     project,
-    layers,
+    layers: activeLayersOf(project.id),
+    rules: describeProjectRules(project),
+    mayEditRules: mayOpen(user.role, "editProjectRules"),
     members: listProjectMembers(project.id),
     mayManage: user.role === "planner" || user.role === "admin",
     mayUpload: user.role === "planner",
     basemapStyleUrl: env().BASEMAP_STYLE_URL,
     ...alternativesOf(project, mayOpen(user.role, "editAlternatives")),
   };
+}
+
+/** The project's active layers for the map and the layer list, with the first of their upload warnings. */
+function activeLayersOf(projectId: number) {
+  return listProjectLayers(projectId)
+    .filter((l) => l.status === "active")
+    .map((l) => ({
+      id: l.id, kind: l.kind, name: l.name, bbox: l.bbox, featureCount: l.featureCount, sourceCrs: l.sourceCrs,
+      warningCount: l.warnings?.length ?? null,
+      warnings: (l.warnings ?? []).slice(0, WARNINGS_SHOWN),
+    }));
 }
 
 /** The project's alternatives for the list, and what "New alternative" needs to start one. */
@@ -73,8 +88,15 @@ function alternativesOf(project: { id: number; crs: string | null }, mayEditAlte
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
-  const { user, project } = await loadProject(request, params, ["planner", "admin"]);
-  const parsed = MemberChangeSchema.safeParse(await readForm(request));
+  const { user, project } = await loadProject(request, params, ACCESS.editProjectRules);
+  const form = await readForm(request);
+  if (form.intent === "save-rules") {
+    const read = readTakeRulesForm(form);
+    if (!read.ok) return data({ ok: false, fieldErrors: read.fieldErrors, error: null }, { status: 400 });
+    saveProjectTakeRules(project, read.patch, user);
+    return data({ ok: true, fieldErrors: {}, error: null });
+  }
+  const parsed = MemberChangeSchema.safeParse(form);
   if (!parsed.success) return data({ error: parsed.error.issues[0]?.message ?? "Check the form." }, { status: 400 });
   const change = parsed.data;
   if (change.intent === "add-member") {
@@ -90,7 +112,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 export default function ProjectPage() {
-  const { project, layers, members, mayManage, mayUpload, basemapStyleUrl, alternatives, mayEditAlternatives, startingPoints, crsDefinition } = useLoaderData<typeof loader>();
+  const { project, layers, rules, mayEditRules, members, mayManage, mayUpload, basemapStyleUrl, alternatives, mayEditAlternatives, startingPoints, crsDefinition } = useLoaderData<typeof loader>();
   const fabricBbox = layers.find((l) => l.kind === "parcels")?.bbox ?? null;
   const areaUnit = project.units === "m" ? "m²" : project.units === "ft" ? "ft²" : "US ft²";
   const result = useActionData<typeof action>();
@@ -126,18 +148,11 @@ export default function ProjectPage() {
       >
         <AlternativeList projectId={project.id} units={project.units} alternatives={alternatives} />
       </Card>
+      <Card title="Take and cost rules">
+        <TakeRulesForm rows={rules} units={project.units} mayEdit={mayEditRules} />
+      </Card>
       <Card title="Layers">
-        <Table
-          rows={layers}
-          rowKey={(l) => l.id}
-          empty="No layers yet."
-          columns={[
-            { header: "Layer", cell: (l) => l.name },
-            { header: "Holds", cell: (l) => (l.kind === "parcels" ? "parcels" : "building footprints") },
-            { header: "Features", cell: (l) => l.featureCount.toLocaleString(), align: "right" },
-            { header: "Source CRS", cell: (l) => l.sourceCrs },
-          ]}
-        />
+        <LayerList projectId={project.id} layers={layers} />
         {mayUpload && (
           <div className="mt-6 border-t border-rule pt-4">
             <h3 className="mb-3 font-semibold">Upload a layer</h3>
