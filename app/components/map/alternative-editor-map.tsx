@@ -2,7 +2,7 @@ import { useMemo, useRef, useState } from "react";
 import Map, { Layer, NavigationControl, ScaleControl, Source, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
-import { browserMapLib, markMapReady } from "./map-lib";
+import { markMapReady, sharedMapProps } from "./map-lib";
 import { OverlayLegend } from "./overlay-legend";
 import type { OverlayData } from "./overlay-data";
 import { PiMarkers, type PiMarkerHandlers } from "./pi-markers";
@@ -76,14 +76,12 @@ export function AlternativeEditorMap(props: EditorMapProps) {
       </div>
       <div className="relative h-[520px] overflow-hidden rounded-lg border border-rule" data-testid="alternative-map">
         <Map
+          {...sharedMapProps(props.basemapStyleUrl)}
           ref={mapRef}
-          mapLib={browserMapLib()}
-          mapStyle={props.basemapStyleUrl}
           initialViewState={initialBounds ? { bounds: initialBounds, fitBoundsOptions: { padding: 60 } } : { longitude: 0, latitude: 20, zoom: 1 }}
           onClick={onClick}
           cursor={adding && editable ? "crosshair" : "grab"}
           onLoad={markMapReady}
-          attributionControl={false}
         >
           <NavigationControl position="top-left" showCompass={false} />
           <ScaleControl position="bottom-right" unit={props.metric ? "metric" : "imperial"} />

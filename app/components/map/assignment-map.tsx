@@ -3,7 +3,7 @@ import type { ExpressionSpecification } from "maplibre-gl";
 import Map, { Layer, NavigationControl, ScaleControl, type MapLayerMouseEvent } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
-import { browserMapLib, markMapReady } from "./map-lib";
+import { markMapReady, sharedMapProps } from "./map-lib";
 import { toOverlayData } from "./overlay-data";
 import type { ParcelCaseDrawing } from "./parcel-case-map";
 import type { MapLayerInfo } from "./project-map";
@@ -36,13 +36,11 @@ export function AssignmentMap(props: {
   return (
     <div className="relative h-[460px] overflow-hidden rounded-lg border border-rule" data-testid="assignment-map">
       <Map
-        mapLib={browserMapLib()}
-        mapStyle={basemapStyleUrl}
+        {...sharedMapProps(basemapStyleUrl)}
         initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 50 } } : { longitude: 0, latitude: 20, zoom: 1 }}
         interactiveLayerIds={source && ids.length ? ["assign-fill"] : []}
         onClick={onClick}
         onLoad={markMapReady}
-        attributionControl={false}
       >
         <NavigationControl position="top-left" showCompass={false} />
         <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />

@@ -2,7 +2,7 @@ import { useMemo } from "react";
 import Map, { Layer, NavigationControl, ScaleControl, Source } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
-import { browserMapLib, markMapReady } from "./map-lib";
+import { markMapReady, sharedMapProps } from "./map-lib";
 import { TAKE_FILL, TAKE_OPACITY, TAKE_STYLES } from "./outline-styles";
 import { EMPTY_OVERLAY, type OverlayData } from "./overlay-data";
 import type { MapLayerInfo } from "./project-map";
@@ -25,11 +25,9 @@ export function ComparisonMap({ layers, basemapStyleUrl, metric, crs, alternativ
   return (
     <div className="relative h-[480px] overflow-hidden rounded-lg border border-rule" data-testid="comparison-map">
       <Map
-        mapLib={browserMapLib()}
-        mapStyle={basemapStyleUrl}
+        {...sharedMapProps(basemapStyleUrl)}
         initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 50 } } : { longitude: 0, latitude: 20, zoom: 1 }}
         onLoad={markMapReady}
-        attributionControl={false}
       >
         <NavigationControl position="top-left" showCompass={false} />
         <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />

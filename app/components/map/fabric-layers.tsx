@@ -3,6 +3,12 @@ import { parcelFillColour, type ParcelColouring } from "./parcel-styles";
 import type { MapLayerInfo } from "./project-map";
 
 /**
+ * Footprints are a pixel or two wide below zoom 14 (common practice is to leave them out there);
+ * not asking for their tiles keeps the first view of a town light.
+ */
+const BUILDINGS_MIN_ZOOM = 14;
+
+/**
  * The project's parcel and building layers as vector tiles from the app, parcels first so the
  * building footprints draw on top. `dim` lightens the fabric under an alternative's overlays.
  */
@@ -14,7 +20,7 @@ export function FabricLayers({ layers, hidden = new Set(), colouring = "landUse"
       {ordered.map((l) => {
         const visibility = hidden.has(l.id) ? "none" : "visible";
         return (
-          <Source key={l.id} id={`layer-${l.id}`} type="vector" tiles={[`${origin}/tiles/layers/${l.id}/{z}/{x}/{y}.pbf`]} minzoom={0} maxzoom={18}>
+          <Source key={l.id} id={`layer-${l.id}`} type="vector" tiles={[`${origin}/tiles/layers/${l.id}/{z}/{x}/{y}.pbf`]} minzoom={l.kind === "buildings" ? BUILDINGS_MIN_ZOOM : 0} maxzoom={18}>
             {l.kind === "parcels" ? (
               <>
                 <Layer id={`parcels-fill-${l.id}`} source={`layer-${l.id}`} type="fill" source-layer="parcels" layout={{ visibility }}

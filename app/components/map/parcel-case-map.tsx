@@ -2,7 +2,7 @@ import { useMemo } from "react";
 import type { FeatureCollection, LineString, MultiPolygon, Polygon } from "geojson";
 import Map, { Layer, NavigationControl, ScaleControl, Source } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
-import { browserMapLib, markMapReady } from "./map-lib";
+import { markMapReady, sharedMapProps } from "./map-lib";
 import { TAKE_STYLES } from "./outline-styles";
 import { toOverlayData } from "./overlay-data";
 import { createWorkingCrs } from "./working-crs";
@@ -29,11 +29,9 @@ export function ParcelCaseMap({ drawing, parcelId, colour, basemapStyleUrl, metr
   return (
     <div className="relative h-[420px] overflow-hidden rounded-lg border border-rule" data-testid="parcel-case-map">
       <Map
-        mapLib={browserMapLib()}
-        mapStyle={basemapStyleUrl}
+        {...sharedMapProps(basemapStyleUrl)}
         initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 80, maxZoom: 18 } } : { longitude: 0, latitude: 20, zoom: 1 }}
         onLoad={markMapReady}
-        attributionControl={false}
       >
         <NavigationControl position="top-left" showCompass={false} />
         <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />

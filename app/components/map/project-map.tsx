@@ -1,7 +1,7 @@
 import { useCallback, useMemo, useRef, useState } from "react";
 import Map, { NavigationControl, ScaleControl, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
 import { FabricLayers } from "./fabric-layers";
-import { browserMapLib, markMapReady } from "./map-lib";
+import { markMapReady, sharedMapProps } from "./map-lib";
 import { MapLegend } from "./map-legend";
 import { ParcelCard, type ParcelSummary } from "./parcel-card";
 import { searchParcelLayers } from "./parcel-search";
@@ -62,9 +62,8 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
       />
       <div className="relative h-[560px] overflow-hidden rounded-lg border border-rule" data-testid="project-map">
         <Map
+          {...sharedMapProps(basemapStyleUrl)}
           ref={mapRef}
-          mapLib={browserMapLib()}
-          mapStyle={basemapStyleUrl}
           initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 40 } } : { longitude: 0, latitude: 20, zoom: 1 }}
           interactiveLayerIds={interactive}
           onMouseMove={onMove}
@@ -72,7 +71,6 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
           onClick={onClick}
           cursor={hovered.current ? "pointer" : "grab"}
           onLoad={markMapReady}
-          attributionControl={false}
         >
           <NavigationControl position="top-left" showCompass={false} />
           <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />

@@ -1,0 +1,36 @@
+/**
+ * "Project map interactive within 2 s on the demo" (issue 4): the built app runs in demo mode,
+ * Debian's Chromium opens the demo project, and the time from navigation to the map's load
+ * event (`window.__takelineMapReady`: style, tiles and glyphs in and the first complete frame
+ * drawn; the map takes input from then on) is printed, first visit and then warm, with the
+ * CPU time each browser thread spent on a warm visit. Prints figures; a benchmark, never a test.
+ */
+import { loadavg } from "node:os";
+import { browserCpuDuring, demoAppUnavailable, formatCpu, median, signedInPage, startDemoApp, waitForMapReady } from "./bench-demo-app";
+
+const unavailable = demoAppUnavailable();
+if (unavailable) {
+  console.log(`map interactive: skipped (${unavailable})`);
+  process.exit(0);
+}
+const app = await startDemoApp();
+try {
+  const page = await signedInPage(app, "manager@demo.test");
+  const url = (await page.getByRole("link", { name: "Quillmere Eastern Bypass" }).getAttribute("href"))!;
+  const ready: number[] = [];
+  const firstTile: number[] = [];
+  const visit = async (run: number) => {
+    const t = performance.now();
+    const tile = page.waitForResponse((r) => r.url().includes("/tiles/layers/"), { timeout: 60_000 }).then(() => performance.now() - t);
+    await page.goto(run === 0 ? url : `${url}?run=${run}`);
+    await waitForMapReady(page);
+    ready.push(performance.now() - t);
+    firstTile.push(await tile);
+  };
+  for (let run = 0; run < 6; run++) await visit(run);
+  const cpu = await browserCpuDuring(app, page, () => visit(6));
+  console.log(`map interactive (navigation → map load event): first visit ${ready[0]!.toFixed(0)} ms, then median ${median(ready.slice(1)).toFixed(0)} ms (goal < 2 s); first parcel tile at ${firstTile[0]!.toFixed(0)} ms, then median ${median(firstTile.slice(1)).toFixed(0)} ms; load average ${loadavg()[0]!.toFixed(1)}`);
+  console.log(`  CPU time of a warm visit by browser thread: ${formatCpu(cpu)}`);
+} finally {
+  await app.stop();
+}
