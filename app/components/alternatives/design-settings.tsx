@@ -3,7 +3,7 @@ import { EMAX_OPTIONS_PERCENT } from "~/geometry/side-friction";
 import type { AlternativeDraft, SpeedUnit } from "./api-types";
 import { NumberInput } from "./number-input";
 
-/** Right-of-way half-widths, easement width, design speed and emax: each change is one edit. */
+/** Base right-of-way half-widths, easement width, design speed and emax: each change is one edit. */
 export function DesignSettings({ draft, unit, editable, onChange }: { draft: AlternativeDraft; unit: string; editable: boolean; onChange: (next: AlternativeDraft) => void }) {
   const id = useId();
   const corridor = (patch: Partial<AlternativeDraft["corridor"]>) => onChange({ ...draft, corridor: { ...draft.corridor, ...patch } });
@@ -33,9 +33,7 @@ export function DesignSettings({ draft, unit, editable, onChange }: { draft: Alt
           {EMAX_OPTIONS_PERCENT.map((e) => <option key={e} value={e}>{e} %</option>)}
         </select>
       </div>
-      {(draft.corridor.ranges?.length ?? 0) > 0 && (
-        <p className="col-span-full text-xs text-ink-soft">{draft.corridor.ranges!.length} station range(s) with other widths are kept as they are (edit them through the API).</p>
-      )}
+      <p className="col-span-full text-xs text-ink-soft">These are the base widths; where the right-of-way is wider or narrower over a stretch, set it under “Right-of-way width by station”.</p>
     </div>
   );
 }
