@@ -20,7 +20,7 @@ export function meta({ data: d }: Route.MetaArgs) {
   return [{ title: `${d?.alternative.name ?? "Alternative"} · Takeline` }];
 }
 
-/** The alternative with its stored impacts, the project's map layers, and the working CRS for reprojection in the browser. */
+/** The alternative with its stored impacts, the project's map layers and take rules, and the working CRS for reprojection in the browser. */
 export async function loader({ request, params }: Route.LoaderArgs) {
   const user = await requireUser(request, { roles: ACCESS.projects });
   const parsed = ParamsSchema.safeParse(params);
@@ -32,7 +32,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     .filter((l) => l.status === "active")
     .map((l) => ({ id: l.id, kind: l.kind, name: l.name, bbox: l.bbox }));
   return {
-    project: { id: project.id, name: project.name, units: project.units },
+    project: { id: project.id, name: project.name, units: project.units, takeRules: project.takeRules ?? null },
     alternative: toAlternativeJson(alternative, { summary: readImpacts(alternative, project).summary }),
     layers,
     basemapStyleUrl: env().BASEMAP_STYLE_URL,
@@ -62,6 +62,7 @@ export default function AlternativePage() {
         layers={layers}
         basemapStyleUrl={basemapStyleUrl}
         crsDefinition={crsDefinition}
+        projectRules={project.takeRules}
         editable={editable}
       />
       <DownloadLinks kind="alternative" alternativeId={alternative.id} />

@@ -17,12 +17,12 @@ async function callApi<T>(method: string, path: string, body: unknown, signal?: 
 }
 
 /**
- * An unsaved what-if of the draft. The design fields ride along so the checks follow the speed
- * being edited once the preview route reads them; extra keys are ignored otherwise.
+ * An unsaved what-if of the draft: corridor, rules and design fields ride along, so the takes,
+ * costs and checks follow what is being edited.
  */
 export function requestPreview(alternativeId: number, draft: AlternativeDraft, signal?: AbortSignal) {
-  const { alignment, corridor, designSpeed, speedUnit, emaxPercent, acceptedChecks } = draft;
-  return callApi<PreviewResult>("POST", `/api/v1/alternatives/${alternativeId}/preview`, { alignment, corridor, designSpeed, speedUnit, emaxPercent, acceptedChecks }, signal);
+  const { alignment, corridor, rules, designSpeed, speedUnit, emaxPercent, acceptedChecks } = draft;
+  return callApi<PreviewResult>("POST", `/api/v1/alternatives/${alternativeId}/preview`, { alignment, corridor, rules, designSpeed, speedUnit, emaxPercent, acceptedChecks }, signal);
 }
 
 /** Saves the draft made from `version`: 200 with the new version, 409 when someone saved since. */

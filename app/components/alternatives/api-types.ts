@@ -4,7 +4,7 @@ import type { ReviewedCheck, CheckAcceptance } from "~/calculations/check-accept
 import type { ParcelImpactJson } from "~/calculations/impact-json";
 import type { SweepStep, SweepVariable } from "~/calculations/curve-sweep";
 import type { AlignmentElement, AlignmentInput, CurveSummary, KeyStation } from "~/geometry/alignment-types";
-import type { CorridorInput } from "~/geometry/take-types";
+import type { CorridorInput, TakeRules } from "~/geometry/take-types";
 
 /** JSON shapes of the alternatives API as the browser reads them (see the README's API table). */
 export type { AlternativeSummary, CheckAcceptance, ParcelImpactJson, ReviewedCheck, SweepStep, SweepVariable };
@@ -43,6 +43,8 @@ export interface AlternativeDraft {
   designSpeed: number;
   speedUnit: SpeedUnit;
   emaxPercent: number;
+  /** This alternative's own take and cost rules; missing keys come from the project, then the defaults. */
+  rules?: Partial<TakeRules>;
   acceptedChecks: CheckAcceptance[];
 }
 

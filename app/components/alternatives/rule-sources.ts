@@ -18,8 +18,8 @@ export interface RuleField {
 
 /** Every take and cost rule with its unit and the limits of TakeRulesSchema (app/schemas/take-schemas.ts). */
 export const RULE_FIELDS: readonly RuleField[] = [
-  { key: "remnantMinArea", label: "Remainder smaller than this is an uneconomic remnant", unit: areaUnitLabel, min: 0, max: 1e12 },
-  { key: "remnantMinFraction", label: "…or smaller than this fraction of the parcel", unit: () => "fraction, 0–1", min: 0, max: 1 },
+  { key: "remnantMinArea", label: "Uneconomic remnant: remainder under this area", unit: areaUnitLabel, min: 0, max: 1e12 },
+  { key: "remnantMinFraction", label: "Uneconomic remnant: remainder under this fraction of the parcel", unit: () => "fraction, 0–1", min: 0, max: 1 },
   { key: "landValuePerArea", label: "Land value where a parcel has none", unit: (u) => `per ${areaUnitLabel(u)}`, min: 0, max: 1e12 },
   { key: "buildingValue", label: "Value of a displaced building where it has none", unit: () => "per building", min: 0, max: 1e12 },
   { key: "severancePercent", label: "Severance damages on partial takes", unit: () => "% of land", min: 0, max: 1000 },
