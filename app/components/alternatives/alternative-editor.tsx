@@ -6,7 +6,8 @@ import { createWorkingCrs, type Xy } from "~/components/map/working-crs";
 import { Card } from "~/components/ui/card";
 import { applyCheckAcceptances } from "~/calculations/check-acceptances";
 import { AffectedParcels } from "./affected-parcels";
-import type { AlternativeDraft, AlternativeJson } from "./api-types";
+import type { CorridorInput, CorridorWidthRange } from "~/geometry/take-types";
+import type { AlternativeDraft, AlternativeJson, PreviewResult } from "./api-types";
 import { CurveElements } from "./curve-elements";
 import { CurveTradeoffPanel } from "./curve-tradeoff-panel";
 import { DesignChecksPanel } from "./design-checks-panel";
@@ -15,11 +16,15 @@ import { EditorHeader } from "./editor-header";
 import { EstimateNotice } from "./estimate-notice";
 import { areaUnitLabel, lengthUnitLabel } from "./format";
 import { PiTable, type PiTableActions } from "./pi-table";
+import type { RuleOverrides } from "./rule-sources";
+import { TakeRulesCard } from "./take-rules-card";
 import { TakeTotals } from "./take-totals";
 import { useAlternativeEditor } from "./use-alternative-editor";
 import { useAutosave } from "./use-autosave";
 import { useDraftEdits } from "./use-draft-edits";
 import { usePreview } from "./use-preview";
+import type { StationExtent } from "./width-ranges";
+import { WidthRangesEditor } from "./width-ranges-editor";
 
 export interface EditorProps {
   alternative: AlternativeJson;
@@ -28,15 +33,18 @@ export interface EditorProps {
   layers: MapLayerInfo[];
   basemapStyleUrl: string;
   crsDefinition: string;
+  /** The project's own take rules (null: the defaults apply), under this alternative's overrides. */
+  projectRules: RuleOverrides | null;
   editable: boolean;
 }
 
 function draftOf(a: AlternativeJson): AlternativeDraft {
-  return { alignment: a.alignment, corridor: a.corridor, designSpeed: a.designSpeed, speedUnit: a.speedUnit, emaxPercent: a.emaxPercent, acceptedChecks: a.acceptedChecks.map(({ id, reason }) => ({ id, reason })) };
+  const acceptedChecks = a.acceptedChecks.map(({ id, reason, acceptedBy, acceptedAt }) => ({ id, reason, ...(acceptedBy ? { acceptedBy } : {}), ...(acceptedAt ? { acceptedAt } : {}) }));
+  return { alignment: a.alignment, corridor: a.corridor, rules: a.rules ?? {}, designSpeed: a.designSpeed, speedUnit: a.speedUnit, emaxPercent: a.emaxPercent, acceptedChecks };
 }
 
 /** The planner's alternative editor (read only for everyone else): map, PI table, elements, checks, totals, trade-off. */
-export function AlternativeEditor({ alternative, projectId, projectName, layers, basemapStyleUrl, crsDefinition, editable }: EditorProps) {
+export function AlternativeEditor({ alternative, projectId, projectName, layers, basemapStyleUrl, crsDefinition, projectRules, editable }: EditorProps) {
   const crs = useMemo(() => createWorkingCrs(crsDefinition), [crsDefinition]);
   const editor = useAlternativeEditor(useMemo(() => draftOf(alternative), [alternative]), editable);
   const autosave = useAutosave(alternative.id, alternative.version, editor.committed, editable);
@@ -53,10 +61,14 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
     onCurve: edits.setCurveAt,
     onDelete: edits.remove,
     onSelect: setSelected,
-  }), [edits]);
+    // The curves of the last alignment that computed: the new PI goes on the tangent between them.
+    onInsertAfter: (i) => edits.insertAfter(i, preview.error ? [] : (result?.geometry.curves ?? [])),
+  }), [edits, result, preview.error]);
   const summary = result?.summary ?? alternative.summary ?? null;
   // The preview reviews checks against the saved acceptances; show the draft's own at once.
-  const checks = useMemo(() => (result ? applyCheckAcceptances(result.checks.map(({ accepted: _, ...c }) => c), editor.draft.acceptedChecks).checks : []), [result, editor.draft.acceptedChecks]);
+  const reviewed = useMemo(() => (result ? applyCheckAcceptances(result.checks.map(({ accepted: _, ...c }) => c), editor.draft.acceptedChecks) : { checks: [], stale: [] }), [result, editor.draft.acceptedChecks]);
+  const extent = useMemo(() => stationExtentOf(result), [result]);
+  const draft = editor.draft;
 
   return (
     <div className="space-y-6">
@@ -80,12 +92,19 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
       </Card>
       <div className="grid gap-6 lg:grid-cols-2">
         <Card title="Design checks">
-          {result ? <DesignChecksPanel checks={checks} editable={editable} onAccept={edits.accept} onWithdraw={edits.withdraw} /> : <p className="text-sm text-ink-soft">Computing…</p>}
+          {result ? <DesignChecksPanel checks={reviewed.checks} stale={reviewed.stale} editable={editable} onAccept={edits.accept} onWithdraw={edits.withdraw} onDropStale={edits.dropAcceptances} /> : <p className="text-sm text-ink-soft">Computing…</p>}
         </Card>
         <Card title="Corridor and design">
-          <DesignSettings draft={editor.draft} unit={lengthUnitLabel(units)} editable={editable} onChange={editor.commit} />
+          <DesignSettings draft={draft} unit={lengthUnitLabel(units)} editable={editable} onChange={editor.commit} />
         </Card>
       </div>
+      <Card title="Right-of-way width by station">
+        <WidthRangesEditor corridor={draft.corridor} units={units} extent={extent} equations={(draft.alignment.stationEquations?.length ?? 0) > 0} editable={editable}
+          onChange={(ranges) => editor.commit({ ...draft, corridor: withRanges(draft.corridor, ranges) })} />
+      </Card>
+      <Card title="Take and cost rules">
+        <TakeRulesCard units={units} projectRules={projectRules} rules={draft.rules} editable={editable} onChange={(rules) => editor.commit({ ...draft, rules })} />
+      </Card>
       <Card title="Curve trade-off">
         <CurveTradeoffPanel alternativeId={alternative.id} draft={editor.draft} piIndex={selected} editable={editable} flush={autosave.flush} onApply={edits.applySweep} />
       </Card>
@@ -94,4 +113,17 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
       </Card>
     </div>
   );
+}
+
+/** The internal stations of the computed alignment's first and last points, or null before it computes. */
+function stationExtentOf(result: PreviewResult | null): StationExtent | null {
+  const pob = result?.geometry.stations.find((s) => s.label === "POB");
+  const poe = result?.geometry.stations.find((s) => s.label === "POE");
+  return pob && poe ? { start: pob.station, end: poe.station } : null;
+}
+
+/** The corridor with these ranges (none: the key is left out, as a corridor without ranges is stored). */
+function withRanges(corridor: CorridorInput, ranges: CorridorWidthRange[]): CorridorInput {
+  const { ranges: _, ...rest } = corridor;
+  return ranges.length > 0 ? { ...rest, ranges } : rest;
 }

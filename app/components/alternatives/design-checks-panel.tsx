@@ -2,15 +2,19 @@ import { useState } from "react";
 import { Badge } from "~/components/ui/badge";
 import { Button } from "~/components/ui/button";
 import { Dialog } from "~/components/ui/dialog";
-import type { ReviewedCheck } from "./api-types";
+import type { CheckAcceptance, ReviewedCheck } from "./api-types";
+import { StaleAcceptances } from "./stale-acceptances";
 
 /**
  * Design-check results beside the elements. Checks never block: a planner may accept a warning,
  * but only with a reason, which is stored with the alternative and shown to everyone.
  */
-export function DesignChecksPanel({ checks, editable, onAccept, onWithdraw }: {
+export function DesignChecksPanel({ checks, stale, editable, onAccept, onWithdraw, onDropStale }: {
   checks: ReviewedCheck[];
+  /** Acceptances that match no current warning. */
+  stale: CheckAcceptance[];
   editable: boolean;
+  onDropStale: (ids: string[]) => void;
   onAccept: (id: string, reason: string) => void;
   onWithdraw: (id: string) => void;
 }) {
@@ -44,6 +48,7 @@ export function DesignChecksPanel({ checks, editable, onAccept, onWithdraw }: {
           </li>
         ))}
       </ul>
+      <StaleAcceptances stale={stale} editable={editable} onDrop={onDropStale} />
       <AcceptDialog check={accepting} onClose={() => setAccepting(null)} onAccept={(reason) => { if (accepting) onAccept(accepting.id, reason); setAccepting(null); }} />
     </div>
   );

@@ -1,9 +1,10 @@
 import { useEffect, useMemo } from "react";
-import type { AlignmentCurveInput } from "~/geometry/alignment-types";
+import type { AlignmentCurveInput, CurveSummary } from "~/geometry/alignment-types";
 import { computeMinimumRadius } from "~/geometry/min-radius";
 import { convertLength } from "~/geometry/units";
 import { curveOfKind, deflectionDeg, deletePoint, insertPoint, movePoint, setCurve, type CurveKind, type Point2 } from "./alignment-edits";
 import type { AlternativeDraft, SweepVariable } from "./api-types";
+import { findInsertionPoint, insertPointAfter } from "./pi-insertion";
 import { applySweepValue } from "./sweep-defaults";
 import { isTextEntry, type AlternativeEditor } from "./use-alternative-editor";
 
@@ -14,12 +15,16 @@ export interface DraftEdits {
   move: (index: number, xy: Point2, live?: boolean) => void;
   nudge: (index: number, dx: number, dy: number) => void;
   add: (xy: Point2) => void;
+  /** Inserts an angle point after point `index`, on the tangent that follows (see findInsertionPoint); returns its index. */
+  insertAfter: (index: number, curves: readonly CurveSummary[]) => number | null;
   remove: (index: number) => void;
   setKind: (index: number, kind: CurveKind) => void;
   setCurveAt: (index: number, curve: AlignmentCurveInput) => void;
   applySweep: (index: number, vary: SweepVariable, value: number) => void;
   accept: (id: string, reason: string) => void;
   withdraw: (id: string) => void;
+  /** Removes acceptances (those that no longer apply) in one edit. */
+  dropAcceptances: (ids: string[]) => void;
 }
 
 /** The editor's edits as history steps; Delete removes the selected point when focus is not in a field. */
@@ -37,6 +42,14 @@ export function useDraftEdits(editor: AlternativeEditor, selected: number | null
       commit(withAlignment(alignment));
       setSelected(index);
     },
+    insertAfter: (i, curves) => {
+      const p = findInsertionPoint(draft.alignment, i, curves);
+      if (!p) return null;
+      const { alignment, index } = insertPointAfter(draft.alignment, i, [roundMm(p[0]), roundMm(p[1])]);
+      commit(withAlignment(alignment));
+      setSelected(index);
+      return index;
+    },
     remove: (i) => {
       if (draft.alignment.points.length <= 2) return;
       commit(withAlignment(deletePoint(draft.alignment, i)));
@@ -50,6 +63,7 @@ export function useDraftEdits(editor: AlternativeEditor, selected: number | null
     applySweep: (i, vary, value) => commit(withAlignment(setCurve(draft.alignment, i, applySweepValue(draft.alignment.points[i]?.curve, vary, value)))),
     accept: (id, reason) => commit({ ...draft, acceptedChecks: [...draft.acceptedChecks.filter((a) => a.id !== id), { id, reason }] }),
     withdraw: (id) => commit({ ...draft, acceptedChecks: draft.acceptedChecks.filter((a) => a.id !== id) }),
+    dropAcceptances: (ids) => commit({ ...draft, acceptedChecks: draft.acceptedChecks.filter((a) => !ids.includes(a.id)) }),
   }), [draft, commit, drag, setSelected]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useEffect(() => {
