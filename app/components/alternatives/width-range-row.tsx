@@ -115,7 +115,7 @@ export function NewRangeRow({ unit, base, commit, disabled, example }: Omit<RowP
         <RangeCells label="New range" unit={unit} base={base} text={text} setText={setText} invalid={refused !== null} messageId={id} onEnter={add} example={example}
           onEscape={() => { setText(EMPTY_RANGE_TEXT); setRefused(null); }} />
         <td className="px-1 py-1">
-          <Button variant="secondary" disabled={disabled} onClick={add}>Add range</Button>
+          <Button variant="secondary" className="whitespace-nowrap" disabled={disabled} onClick={add}>Add range</Button>
         </td>
       </tr>
       <MessageRow id={id} message={refused} alert />
