@@ -1,6 +1,7 @@
 import type { AlignmentElement, AlignmentInput } from "~/geometry/alignment-types";
 import { computeAlignmentGeometry, type AlignmentGeometry } from "~/geometry/compute-alignment-geometry";
-import type { DesignCheckInput } from "~/geometry/design-check-types";
+import type { DesignCheckInput, DesignCheckResult } from "~/geometry/design-check-types";
+import { selfOverlapMessage } from "~/geometry/take-assemble";
 import type { CorridorInput, TakeResult, TakeRules } from "~/geometry/take-types";
 import { summarizeAlternative, type AlternativeSummary } from "./alternative-summary";
 import { applyCheckAcceptances, type CheckAcceptance, type ReviewedCheck } from "./check-acceptances";
@@ -29,7 +30,22 @@ export interface Evaluation {
 /** Alignment → checks → corridor → takes → summary, for one set of inputs. Throws GeometryInputError. */
 export function evaluateAlternative(inputs: EvaluationInputs, takes: TakeComputer): Evaluation {
   const geometry = computeAlignmentGeometry(inputs.alignment, { design: inputs.design });
-  const reviewed = applyCheckAcceptances(geometry.checks, inputs.acceptedChecks);
   const result = takes.compute(geometry.elements, inputs.corridor, inputs.rules);
+  const reviewed = applyCheckAcceptances([...geometry.checks, ...selfOverlapChecks(result)], inputs.acceptedChecks);
   return { geometry, checks: reviewed.checks, staleAcceptances: reviewed.stale, takes: result, summary: summarizeAlternative(geometry, reviewed.checks, result) };
+}
+
+/**
+ * A corridor that covers the same ground twice is a warning beside the design checks: its takes
+ * there are counted twice, so the planner must see it where they review the design.
+ */
+export function selfOverlapChecks(result: TakeResult): DesignCheckResult[] {
+  return (result.corridorSelfOverlaps ?? []).map((o, k) => ({
+    id: `corridor-self-overlap-${k + 1}`,
+    severity: "warning",
+    message: selfOverlapMessage(o),
+    value: o.area,
+    limit: 0,
+    source: "Common practice: a right-of-way is one strip of land, so no ground may lie in it twice",
+  }));
 }

@@ -1,3 +1,4 @@
+import { findCorridorSelfOverlaps, type CorridorSelfOverlap } from "./corridor-self-overlap";
 import type { Corridor, CorridorPiece } from "./corridor-types";
 import { OVERLAP_WARNING_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
 import { classifyTake, costTake } from "./take-costs";
@@ -56,6 +57,8 @@ export function assembleTakeResult(a: AssembleInput): TakeResult {
   if (sumTake > a.row.area + OVERLAP_WARNING_AREA) {
     warnings.push(`Parcels overlap inside the corridor: their takes add up to ${roundForMessage(sumTake - a.row.area)} square units more than the right-of-way's area.`);
   }
+  const selfOverlaps = findCorridorSelfOverlaps(a.row);
+  for (const o of selfOverlaps) warnings.push(selfOverlapMessage(o));
   const withTake = takes.filter((t) => t.takeArea > TAKE_MIN_AREA);
   return {
     corridorArea: a.row.area,
@@ -73,7 +76,14 @@ export function assembleTakeResult(a: AssembleInput): TakeResult {
       estimatedCost: takes.reduce((s, t) => s + t.cost.total, 0),
     },
     warnings,
+    corridorSelfOverlaps: selfOverlaps,
   };
+}
+
+/** Stations here are internal (start station + distance), the engine's own. */
+export function selfOverlapMessage(o: CorridorSelfOverlap): string {
+  const range = (r: [number, number]) => `${roundForMessage(r[0])}–${roundForMessage(r[1])}`;
+  return `The right-of-way covers the same ground twice (about ${roundForMessage(o.area)} square units) between internal stations ${range(o.first)} and ${range(o.second)}: takes there are counted twice. Move the alignment apart there or narrow the corridor.`;
 }
 
 function parcelTake(a: AssembleInput, i: number, found: BuildingFinding[]): ParcelTake {

@@ -1,3 +1,5 @@
+import type { CorridorSelfOverlap } from "./corridor-self-overlap";
+
 /**
  * The corridor and land-take contract shared by the engine, the API, storage and the UI.
  * Lengths are in the alignment's units; areas in those units squared; stations are internal
@@ -120,4 +122,6 @@ export interface TakeResult {
   totals: TakeTotals;
   /** Plain-language notes, e.g. parcels that overlap each other inside the corridor. */
   warnings: string[];
+  /** Stretches where the right-of-way covers the same ground twice (their takes are counted twice). */
+  corridorSelfOverlaps: CorridorSelfOverlap[];
 }

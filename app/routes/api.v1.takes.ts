@@ -37,6 +37,7 @@ export const action = apiHandler(async ({ request }: Route.ActionArgs) => {
     parcels: result.parcels.map(toParcelImpactJson),
     totals: result.totals,
     warnings: result.warnings,
+    corridorSelfOverlaps: result.corridorSelfOverlaps,
     ...(withGeometry ? { geometry: computeTakeOutlines(elements, body.corridor, result.parcels, parcels) } : {}),
   });
 });
