@@ -34,25 +34,45 @@ async function timePreviews(app: DemoApp, cookie: string, alt: DemoAlternative, 
   return times;
 }
 
-/** In the browser: type a new x for PI 1, press Enter, wait until the totals are no longer busy and show a new take area. */
-async function timeEditorRoundTrips(app: DemoApp, alt: DemoAlternative, runs: number): Promise<number[]> {
+/**
+ * In the browser: type a new x for PI 1 and press Enter, many times. Timed inside the page, from
+ * the Enter keydown to the first frame after the take-area total changed (a MutationObserver,
+ * then an animation frame and a task: the frame that shows the figure has been produced), so
+ * that Playwright's polling interval is not in the figure. Also from the keydown to the map's
+ * next `idle` after the change (the corridor and takes redrawn), from the same observer.
+ */
+async function timeEditorRoundTrips(app: DemoApp, alt: DemoAlternative, runs: number): Promise<{ totals: number[]; map: number[] }> {
   const page = await signedInPage(app, "planner@demo.test");
   await page.goto(`/projects/${alt.projectId}/alternatives/${alt.id}`);
   await waitForMapReady(page);
   await page.locator('[data-testid="take-totals"][aria-busy="false"]').waitFor({ timeout: 60_000 });
+  await page.evaluate(`(() => {
+    const w = window;
+    w.__trips = [];
+    document.addEventListener("keydown", (e) => { if (e.key === "Enter") w.__enterAt = performance.now(); }, true);
+    const totals = document.querySelector('[data-testid="total-takeArea"]');
+    new MutationObserver(() => {
+      const t0 = w.__enterAt;
+      if (t0 === undefined) return;
+      w.__enterAt = undefined;
+      requestAnimationFrame(() => setTimeout(() => w.__trips.push(performance.now() - t0), 0));
+    }).observe(totals, { childList: true, characterData: true, subtree: true });
+  })()`);
   const input = page.getByLabel("PI 1 x", { exact: true });
   const x0 = alt.alignment.points[1]!.x;
-  const times: number[] = [];
+  const map: number[] = [];
   for (let k = 1; k <= runs; k++) {
     const before = await page.getByTestId("total-takeArea").textContent();
     await input.fill(String(x0 + (k % 2 === 1 ? 3 : 0)));
     const t = performance.now();
     await input.press("Enter");
     await page.locator('[data-testid="take-totals"][aria-busy="false"]').filter({ has: page.getByTestId("total-takeArea").filter({ hasNotText: before ?? "" }) }).waitFor({ timeout: 30_000 });
-    times.push(performance.now() - t);
+    await page.locator('[data-testid="alternative-map"][data-drawing="drawn"]').waitFor({ timeout: 30_000 });
+    map.push(performance.now() - t);
   }
+  const totals = (await page.evaluate("window.__trips")) as number[];
   await page.close();
-  return times;
+  return { totals, map };
 }
 
 /** A 40-step radius sweep at the first simple curve, from 0.7 R to 1.5 R. */
@@ -77,8 +97,9 @@ if (unavailable) {
     for (const alt of alternatives) await timePreviews(app, cookie, alt, 3); // warm the land session and the JIT
     const preview = await timePreviews(app, cookie, alternatives[0]!, 20);
     console.log(`(f) preview request (PI 1 moved 3 m, HTTP, server compute + JSON): median ${median(preview).toFixed(0)} ms, fastest ${Math.min(...preview).toFixed(0)} ms`);
-    const trips = await timeEditorRoundTrips(app, alternatives[0]!, 12);
-    console.log(`(g) editor round trip in Chromium (Enter on a PI coordinate → new totals shown): median ${median(trips).toFixed(0)} ms, fastest ${Math.min(...trips).toFixed(0)} ms (goal < 150 ms)`);
+    const trips = await timeEditorRoundTrips(app, alternatives[0]!, 15);
+    console.log(`(g) editor round trip in Chromium, software WebGL (Enter on a PI coordinate → the frame showing the new take total): median ${median(trips.totals).toFixed(0)} ms, fastest ${Math.min(...trips.totals).toFixed(0)} ms over ${trips.totals.length} edits (goal < 150 ms)`);
+    console.log(`    … until the map has redrawn the corridor and takes (seen from the test driver, so up to ~100 ms of its polling included): median ${median(trips.map).toFixed(0)} ms`);
     for (const alt of alternatives) {
       await timeSweep(app, cookie, alt);
       const runs = [await timeSweep(app, cookie, alt), await timeSweep(app, cookie, alt), await timeSweep(app, cookie, alt)];

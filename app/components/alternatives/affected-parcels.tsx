@@ -1,10 +1,11 @@
+import { memo } from "react";
 import { Badge } from "~/components/ui/badge";
 import { Table } from "~/components/ui/table";
 import type { ParcelImpactJson } from "./api-types";
 import { formatCost, formatNumber } from "./format";
 
 /** Every parcel the draft touches, largest take first. */
-export function AffectedParcels({ parcels, areaUnit }: { parcels: ParcelImpactJson[]; areaUnit: string }) {
+export const AffectedParcels = memo(function AffectedParcels({ parcels, areaUnit }: { parcels: ParcelImpactJson[]; areaUnit: string }) {
   const rows = [...parcels].sort((a, b) => b.takeArea - a.takeArea);
   return (
     <div className="max-h-96 overflow-auto">
@@ -25,4 +26,4 @@ export function AffectedParcels({ parcels, areaUnit }: { parcels: ParcelImpactJs
       />
     </div>
   );
-}
+});

@@ -23,6 +23,7 @@ import { useAlternativeEditor } from "./use-alternative-editor";
 import { useAutosave } from "./use-autosave";
 import { useDraftEdits } from "./use-draft-edits";
 import { usePreview } from "./use-preview";
+import { useValueAfterPaint } from "./use-value-after-paint";
 import type { StationExtent } from "./width-ranges";
 import { WidthRangesEditor } from "./width-ranges-editor";
 
@@ -53,8 +54,12 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
   const edits = useDraftEdits(editor, selected, setSelected, editable);
   const units = editor.draft.alignment.units;
   const result = preview.result;
-  const overlay = useMemo(() => (result ? toOverlayData({ ...result.outlines, centerline: result.centerline }, crs) : EMPTY_OVERLAY), [result, crs]);
+  const overlay = useValueAfterPaint(useMemo(() => (result ? toOverlayData({ ...result.outlines, centerline: result.centerline }, crs) : EMPTY_OVERLAY), [result, crs]));
   const points = useMemo<Xy[]>(() => editor.draft.alignment.points.map((p) => [p.x, p.y]), [editor.draft.alignment]);
+  // A typed edit redraws the dashed PI legs together with the corridor it produces, in one map
+  // frame (without a GPU each frame costs tens of milliseconds); a drag moves them at once.
+  const legAlignment = !editor.live && !preview.error && preview.shownDraft && preview.shownDraft !== editor.draft ? preview.shownDraft.alignment : editor.draft.alignment;
+  const legPoints = useValueAfterPaint(useMemo<Xy[]>(() => legAlignment.points.map((p) => [p.x, p.y]), [legAlignment]));
   const tableActions = useMemo<PiTableActions>(() => ({
     onMove: (i, x, y) => edits.move(i, [x, y]),
     onKind: edits.setKind,
@@ -76,7 +81,7 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
       <EstimateNotice />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <Card title="Map">
-          <AlternativeEditorMap layers={layers} basemapStyleUrl={basemapStyleUrl} metric={units === "m"} crs={crs} points={points} overlay={overlay} colour={alternative.colour}
+          <AlternativeEditorMap layers={layers} basemapStyleUrl={basemapStyleUrl} metric={units === "m"} crs={crs} points={points} legPoints={legPoints} overlay={overlay} colour={alternative.colour}
             editable={editable} selected={selected} onSelect={setSelected}
             onDrag={(i, xy) => edits.move(i, xy, true)} onDragEnd={() => editor.endDrag()} onNudge={edits.nudge} onDelete={edits.remove} onAddPoint={edits.add} />
         </Card>

@@ -1,3 +1,4 @@
+import { memo } from "react";
 import { formatDms } from "~/geometry/angles";
 import type { CurveSummary, KeyStation } from "~/geometry/alignment-types";
 import { formatNumber } from "./format";
@@ -11,7 +12,7 @@ function stationText(stations: KeyStation[], label: KeyStation["label"], piIndex
  * tangents T (PI→PC and PI→PT), arc length L, radius R and deflection Δ — the standard circular-
  * curve elements (Schofield & Breach, Engineering Surveying, 6th ed., §10.1 and §10.3).
  */
-export function CurveElements({ curves, stations, length, unit }: { curves: CurveSummary[]; stations: KeyStation[]; length: number; unit: string }) {
+export const CurveElements = memo(function CurveElements({ curves, stations, length, unit }: { curves: CurveSummary[]; stations: KeyStation[]; length: number; unit: string }) {
   const ends = { pob: stations.find((s) => s.label === "POB")?.stationText, poe: stations.find((s) => s.label === "POE")?.stationText };
   return (
     <div className="space-y-2">
@@ -53,4 +54,4 @@ export function CurveElements({ curves, stations, length, unit }: { curves: Curv
       )}
     </div>
   );
-}
+});

@@ -11,6 +11,8 @@ export interface PreviewState {
   /** The engine's message for the current draft when it does not compute (e.g. tangents overrun). */
   error: string | null;
   pending: boolean;
+  /** The draft `result` was computed for (null before the first answer). */
+  shownDraft: AlternativeDraft | null;
 }
 
 /**
@@ -21,7 +23,7 @@ export interface PreviewState {
  * again: the preview reviews design checks against the saved speed, emax and acceptances.
  */
 export function usePreview(alternativeId: number, draft: AlternativeDraft, live: boolean, savedVersion = 0): PreviewState {
-  const [state, setState] = useState<PreviewState>({ result: null, error: null, pending: true });
+  const [state, setState] = useState<PreviewState>({ result: null, error: null, pending: true, shownDraft: null });
   const latest = useRef(draft);
   const flight = useRef<{ controller: AbortController; seq: number } | null>(null);
   const waiting = useRef(false);
@@ -64,12 +66,13 @@ export function usePreview(alternativeId: number, draft: AlternativeDraft, live:
     waiting.current = false;
     lastSent.current = performance.now();
     setState((s) => (s.pending ? s : { ...s, pending: true }));
-    requestPreview(alternativeId, latest.current, mine.controller.signal)
+    const sent = latest.current;
+    requestPreview(alternativeId, sent, mine.controller.signal)
       .then((outcome) => {
         if (mine.seq < shownSeq.current) return;
         shownSeq.current = mine.seq;
         const newest = mine.seq === seq.current && !waiting.current;
-        setState((s) => (outcome.ok ? { result: outcome.value, error: null, pending: !newest } : { result: s.result, error: outcome.message, pending: !newest }));
+        setState((s) => (outcome.ok ? { result: outcome.value, error: null, pending: !newest, shownDraft: sent } : { ...s, error: outcome.message, pending: !newest }));
       })
       .catch((error: unknown) => {
         if (!isAbort(error)) setState((s) => ({ ...s, error: "The preview could not reach the server; check the connection.", pending: false }));

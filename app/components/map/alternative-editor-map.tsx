@@ -1,4 +1,4 @@
-import { useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import Map, { Layer, NavigationControl, ScaleControl, Source, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
@@ -16,6 +16,8 @@ export interface EditorMapProps {
   crs: WorkingCrs;
   /** The alignment's points in the working CRS. */
   points: Xy[];
+  /** The points the dashed legs join (default `points`): the editor holds them back until the corridor for a typed edit arrives. */
+  legPoints?: Xy[];
   overlay: OverlayData;
   colour: string;
   editable: boolean;
@@ -36,9 +38,16 @@ export function AlternativeEditorMap(props: EditorMapProps) {
   const [adding, setAdding] = useState(false);
   const [fabricShown, setFabricShown] = useState(true);
   const lastDragEnd = useRef(0);
+  // `data-drawing` on the frame says whether the map has drawn the latest corridor and takes
+  // ("drawn" at MapLibre's next idle after a change), for journeys and the editor benchmark.
+  const frame = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (frame.current) frame.current.dataset.drawing = "drawing";
+  }, [props.overlay]);
   const lngLats = useMemo(() => points.map((p) => crs.toLngLat(p)), [points, crs]);
   const initialBounds = useMemo(() => boundsOf(lngLats), []); // eslint-disable-line react-hooks/exhaustive-deps
-  const legs = useMemo(() => collectionOf([{ geometry: { type: "LineString", coordinates: lngLats } }]), [lngLats]);
+  const legLngLats = useMemo(() => (props.legPoints ?? points).map((p) => crs.toLngLat(p)), [props.legPoints, points, crs]);
+  const legs = useMemo(() => collectionOf([{ geometry: { type: "LineString", coordinates: legLngLats } }]), [legLngLats]);
   const handlers: PiMarkerHandlers = {
     onSelect: props.onSelect,
     onDrag: (i, ll) => props.onDrag(i, crs.toWorking(ll)),
@@ -74,7 +83,7 @@ export function AlternativeEditorMap(props: EditorMapProps) {
         <button type="button" className="text-action underline" onClick={zoomToAlignment}>Zoom to the alignment</button>
         {editable && <span className="text-xs text-ink-soft">Drag a point to move it; select one and press Delete to remove it.</span>}
       </div>
-      <div className="relative h-[520px] overflow-hidden rounded-lg border border-rule" data-testid="alternative-map">
+      <div className="relative h-[520px] overflow-hidden rounded-lg border border-rule" data-testid="alternative-map" ref={frame} data-drawing="drawing">
         <Map
           {...sharedMapProps(props.basemapStyleUrl)}
           ref={mapRef}
@@ -82,6 +91,7 @@ export function AlternativeEditorMap(props: EditorMapProps) {
           onClick={onClick}
           cursor={adding && editable ? "crosshair" : "grab"}
           onLoad={markMapReady}
+          onIdle={() => frame.current && (frame.current.dataset.drawing = "drawn")}
         >
           <NavigationControl position="top-left" showCompass={false} />
           <ScaleControl position="bottom-right" unit={props.metric ? "metric" : "imperial"} />
