@@ -2,7 +2,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import Map, { Layer, NavigationControl, ScaleControl, Source, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
-import { markMapReady, sharedMapProps } from "./map-lib";
+import { markMapReady, useSharedMapProps } from "./map-lib";
 import { OverlayLegend } from "./overlay-legend";
 import type { OverlayData } from "./overlay-data";
 import { PiMarkers, type PiMarkerHandlers } from "./pi-markers";
@@ -68,6 +68,8 @@ export function AlternativeEditorMap(props: EditorMapProps) {
     if (b) mapRef.current?.fitBounds([[b[0], b[1]], [b[2], b[3]]], { padding: 60, duration: 400 });
   };
 
+  const fabricHidden = useMemo(() => new Set(fabricShown ? [] : props.layers.map((l) => l.id)), [fabricShown, props.layers]);
+  const mapProps = useSharedMapProps(props.basemapStyleUrl, props.layers, { hidden: fabricHidden, dim: true });
   return (
     <div className="space-y-2">
       <div className="flex flex-wrap items-center gap-3 text-sm">
@@ -84,24 +86,26 @@ export function AlternativeEditorMap(props: EditorMapProps) {
         {editable && <span className="text-xs text-ink-soft">Drag a point to move it; select one and press Delete to remove it.</span>}
       </div>
       <div className="relative h-[520px] overflow-hidden rounded-lg border border-rule" data-testid="alternative-map" ref={frame} data-drawing="drawing">
-        <Map
-          {...sharedMapProps(props.basemapStyleUrl)}
-          ref={mapRef}
-          initialViewState={initialBounds ? { bounds: initialBounds, fitBoundsOptions: { padding: 60 } } : { longitude: 0, latitude: 20, zoom: 1 }}
-          onClick={onClick}
-          cursor={adding && editable ? "crosshair" : "grab"}
-          onLoad={markMapReady}
-          onIdle={() => frame.current && (frame.current.dataset.drawing = "drawn")}
-        >
-          <NavigationControl position="top-left" showCompass={false} />
-          <ScaleControl position="bottom-right" unit={props.metric ? "metric" : "imperial"} />
-          <FabricLayers layers={props.layers} hidden={fabricShown ? new Set() : new Set(props.layers.map((l) => l.id))} dim />
-          <AlternativeOverlays id="alt" data={props.overlay} colour={props.colour} />
-          <Source id="alt-legs" type="geojson" data={legs}>
-            <Layer id="alt-legs-line" type="line" paint={{ "line-color": "#4d5753", "line-width": 1, "line-dasharray": [4, 3] }} />
-          </Source>
-          <PiMarkers points={lngLats} selected={props.selected} editable={editable} handlers={handlers} />
-        </Map>
+        {mapProps && (
+          <Map
+            {...mapProps}
+            ref={mapRef}
+            initialViewState={initialBounds ? { bounds: initialBounds, fitBoundsOptions: { padding: 60 } } : { longitude: 0, latitude: 20, zoom: 1 }}
+            onClick={onClick}
+            cursor={adding && editable ? "crosshair" : "grab"}
+            onLoad={markMapReady}
+            onIdle={() => frame.current && (frame.current.dataset.drawing = "drawn")}
+          >
+            <NavigationControl position="top-left" showCompass={false} />
+            <ScaleControl position="bottom-right" unit={props.metric ? "metric" : "imperial"} />
+            <FabricLayers layers={props.layers} hidden={fabricHidden} dim />
+            <AlternativeOverlays id="alt" data={props.overlay} colour={props.colour} />
+            <Source id="alt-legs" type="geojson" data={legs}>
+              <Layer id="alt-legs-line" type="line" paint={{ "line-color": "#4d5753", "line-width": 1, "line-dasharray": [4, 3] }} />
+            </Source>
+            <PiMarkers points={lngLats} selected={props.selected} editable={editable} handlers={handlers} />
+          </Map>
+        )}
         <OverlayLegend colour={props.colour} />
       </div>
     </div>

@@ -3,7 +3,7 @@ import type { ExpressionSpecification } from "maplibre-gl";
 import Map, { Layer, NavigationControl, ScaleControl, type MapLayerMouseEvent } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
 import { FabricLayers } from "./fabric-layers";
-import { markMapReady, sharedMapProps } from "./map-lib";
+import { markMapReady, useSharedMapProps } from "./map-lib";
 import { toOverlayData } from "./overlay-data";
 import type { ParcelCaseDrawing } from "./parcel-case-map";
 import type { MapLayerInfo } from "./project-map";
@@ -33,26 +33,29 @@ export function AssignmentMap(props: {
     const id = e.features?.[0]?.properties?.parcelId;
     if (id !== undefined && id !== null) onToggle(String(id));
   };
+  const mapProps = useSharedMapProps(basemapStyleUrl, layers, { dim: true });
   return (
     <div className="relative h-[460px] overflow-hidden rounded-lg border border-rule" data-testid="assignment-map">
-      <Map
-        {...sharedMapProps(basemapStyleUrl)}
-        initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 50 } } : { longitude: 0, latitude: 20, zoom: 1 }}
-        interactiveLayerIds={source && ids.length ? ["assign-fill"] : []}
-        onClick={onClick}
-        onLoad={markMapReady}
-      >
-        <NavigationControl position="top-left" showCompass={false} />
-        <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />
-        <FabricLayers layers={layers} dim />
-        <AlternativeOverlays id="assign" data={data} colour="#1e2422" showTakes={false} emphasis={false} />
-        {source && ids.length > 0 && (
-          <>
-            <Layer id="assign-fill" type="fill" source={source} source-layer="parcels" filter={["in", ["to-string", ["get", "parcelId"]], ["literal", ids]]} paint={{ "fill-color": fill, "fill-opacity": 0.75 }} />
-            <Layer id="assign-selected" type="line" source={source} source-layer="parcels" filter={["in", ["to-string", ["get", "parcelId"]], ["literal", selected]]} paint={{ "line-color": "#1e2422", "line-width": 3 }} />
-          </>
-        )}
-      </Map>
+      {mapProps && (
+        <Map
+          {...mapProps}
+          initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 50 } } : { longitude: 0, latitude: 20, zoom: 1 }}
+          interactiveLayerIds={source && ids.length ? ["assign-fill"] : []}
+          onClick={onClick}
+          onLoad={markMapReady}
+        >
+          <NavigationControl position="top-left" showCompass={false} />
+          <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />
+          <FabricLayers layers={layers} dim />
+          <AlternativeOverlays id="assign" data={data} colour="#1e2422" showTakes={false} emphasis={false} />
+          {source && ids.length > 0 && (
+            <>
+              <Layer id="assign-fill" type="fill" source={source} source-layer="parcels" filter={["in", ["to-string", ["get", "parcelId"]], ["literal", ids]]} paint={{ "fill-color": fill, "fill-opacity": 0.75 }} />
+              <Layer id="assign-selected" type="line" source={source} source-layer="parcels" filter={["in", ["to-string", ["get", "parcelId"]], ["literal", selected]]} paint={{ "line-color": "#1e2422", "line-width": 3 }} />
+            </>
+          )}
+        </Map>
+      )}
     </div>
   );
 }

@@ -1,4 +1,8 @@
+import { useEffect, useMemo, useRef, useState } from "react";
+import type { StyleSpecification } from "maplibre-gl";
+import { fabricSources, styleWithFabric, type FabricLook } from "./fabric-style";
 import { preloadMapResources } from "./map-preloads";
+import type { MapLayerInfo } from "./project-map";
 
 let mapLib: Promise<typeof import("maplibre-gl")> | undefined;
 
@@ -25,12 +29,27 @@ export function markMapReady(): void {
 }
 
 /**
- * The props every Takeline map shares. Labels appear without MapLibre's 300 ms fade: with
- * software WebGL (no GPU) each faded frame costs tens of milliseconds of main-thread time, and
- * an edit in the editor would pay for a dozen of them. Also asks the browser early for the
- * style and the first glyphs (`preloadMapResources`).
+ * The props every Takeline map shares, or null until its style is in hand. The basemap style is
+ * fetched here (the page preloaded it) and the fabric's sources and layers are put into it, so
+ * that MapLibre asks for parcel tiles with the basemap's; a style that cannot be fetched is left
+ * to MapLibre by URL. Labels appear without MapLibre's 300 ms fade: with software WebGL (no GPU)
+ * each faded frame costs tens of milliseconds of main-thread time.
  */
-export function sharedMapProps(styleUrl: string) {
+export function useSharedMapProps(styleUrl: string, fabric: MapLayerInfo[] = [], look: FabricLook = {}) {
   preloadMapResources(styleUrl);
-  return { mapLib: browserMapLib(), mapStyle: styleUrl, fadeDuration: 0, attributionControl: false as const };
+  const [base, setBase] = useState<StyleSpecification | "unavailable" | null>(null);
+  useEffect(() => {
+    let live = true;
+    fetch(styleUrl, { credentials: "same-origin" })
+      .then((r) => (r.ok ? (r.json() as Promise<StyleSpecification>) : Promise.reject(new Error(String(r.status)))))
+      .then((s) => live && setBase(s), () => live && setBase("unavailable"));
+    return () => {
+      live = false;
+    };
+  }, [styleUrl]);
+  // The look at the moment the style is made: the fabric components mount in that same render with it.
+  const latest = useRef({ fabric, look });
+  latest.current = { fabric, look };
+  const mapStyle = useMemo(() => (base === null ? null : base === "unavailable" ? styleUrl : styleWithFabric(base, fabricSources(latest.current.fabric, latest.current.look))), [base, styleUrl]);
+  return mapStyle === null ? null : { mapLib: browserMapLib(), mapStyle, fadeDuration: 0, attributionControl: false as const };
 }

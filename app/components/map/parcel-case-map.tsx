@@ -2,7 +2,7 @@ import { useMemo } from "react";
 import type { FeatureCollection, LineString, MultiPolygon, Polygon } from "geojson";
 import Map, { Layer, NavigationControl, ScaleControl, Source } from "react-map-gl/maplibre";
 import { AlternativeOverlays } from "./alternative-overlays";
-import { markMapReady, sharedMapProps } from "./map-lib";
+import { markMapReady, useSharedMapProps } from "./map-lib";
 import { TAKE_STYLES } from "./outline-styles";
 import { toOverlayData } from "./overlay-data";
 import { createWorkingCrs } from "./working-crs";
@@ -26,22 +26,25 @@ export interface ParcelCaseDrawing {
 export function ParcelCaseMap({ drawing, parcelId, colour, basemapStyleUrl, metric }: { drawing: ParcelCaseDrawing; parcelId: string; colour: string; basemapStyleUrl: string; metric: boolean }) {
   const data = useMemo(() => toOverlayData(drawing, createWorkingCrs(drawing.crsDefinition), { colour }), [drawing, colour]);
   const bounds = drawing.parcelBounds ?? undefined;
+  const mapProps = useSharedMapProps(basemapStyleUrl);
   return (
     <div className="relative h-[420px] overflow-hidden rounded-lg border border-rule" data-testid="parcel-case-map">
-      <Map
-        {...sharedMapProps(basemapStyleUrl)}
-        initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 80, maxZoom: 18 } } : { longitude: 0, latitude: 20, zoom: 1 }}
-        onLoad={markMapReady}
-      >
-        <NavigationControl position="top-left" showCompass={false} />
-        <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />
-        <Source id="case-fabric" type="geojson" data={drawing.fabric}>
-          <Layer id="case-fabric-fill" type="fill" paint={{ "fill-color": "#ebe7dc", "fill-opacity": 0.5 }} />
-          <Layer id="case-fabric-line" type="line" paint={{ "line-color": "#5b5446", "line-width": 0.8 }} />
-        </Source>
-        <AlternativeOverlays id="case" data={data} colour={colour} />
-        <Layer id="case-parcel-outline" type="line" source="case-fabric" filter={["==", ["get", "parcelId"], parcelId]} paint={{ "line-color": "#1e2422", "line-width": 3 }} />
-      </Map>
+      {mapProps && (
+        <Map
+          {...mapProps}
+          initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 80, maxZoom: 18 } } : { longitude: 0, latitude: 20, zoom: 1 }}
+          onLoad={markMapReady}
+        >
+          <NavigationControl position="top-left" showCompass={false} />
+          <ScaleControl position="bottom-right" unit={metric ? "metric" : "imperial"} />
+          <Source id="case-fabric" type="geojson" data={drawing.fabric}>
+            <Layer id="case-fabric-fill" type="fill" paint={{ "fill-color": "#ebe7dc", "fill-opacity": 0.5 }} />
+            <Layer id="case-fabric-line" type="line" paint={{ "line-color": "#5b5446", "line-width": 0.8 }} />
+          </Source>
+          <AlternativeOverlays id="case" data={data} colour={colour} />
+          <Layer id="case-parcel-outline" type="line" source="case-fabric" filter={["==", ["get", "parcelId"], parcelId]} paint={{ "line-color": "#1e2422", "line-width": 3 }} />
+        </Map>
+      )}
       <div className="absolute bottom-8 left-3 z-10 rounded-md bg-sheet/95 p-3 text-xs shadow-sheet" aria-label="Legend">
         <ul className="space-y-0.5">
           <li className="flex items-center gap-2"><span className="inline-block h-0.5 w-4 bg-ink" />Parcel {parcelId}</li>

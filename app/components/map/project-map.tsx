@@ -1,7 +1,7 @@
 import { useCallback, useMemo, useRef, useState } from "react";
 import Map, { NavigationControl, ScaleControl, type MapLayerMouseEvent, type MapRef } from "react-map-gl/maplibre";
 import { FabricLayers } from "./fabric-layers";
-import { markMapReady, sharedMapProps } from "./map-lib";
+import { markMapReady, useSharedMapProps } from "./map-lib";
 import { MapLegend } from "./map-legend";
 import { ParcelCard, type ParcelSummary } from "./parcel-card";
 import { searchParcelLayers } from "./parcel-search";
@@ -48,6 +48,7 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
     if (b) mapRef.current?.fitBounds([[b[0], b[1]], [b[2], b[3]]], { padding: 40, duration: 500 });
   };
 
+  const mapProps = useSharedMapProps(basemapStyleUrl, layers, { hidden, colouring });
   return (
     <div className="space-y-3">
       <MapToolbar
@@ -61,21 +62,23 @@ export function ProjectMap({ layers, basemapStyleUrl, areaUnit }: { layers: MapL
         search={(q) => searchParcelLayers(parcelLayers.map((l) => l.id), q)}
       />
       <div className="relative h-[560px] overflow-hidden rounded-lg border border-rule" data-testid="project-map">
-        <Map
-          {...sharedMapProps(basemapStyleUrl)}
-          ref={mapRef}
-          initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 40 } } : { longitude: 0, latitude: 20, zoom: 1 }}
-          interactiveLayerIds={interactive}
-          onMouseMove={onMove}
-          onMouseLeave={() => setHover(null)}
-          onClick={onClick}
-          cursor={hovered.current ? "pointer" : "grab"}
-          onLoad={markMapReady}
-        >
-          <NavigationControl position="top-left" showCompass={false} />
-          <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />
-          <FabricLayers layers={layers} hidden={hidden} colouring={colouring} />
-        </Map>
+        {mapProps && (
+          <Map
+            {...mapProps}
+            ref={mapRef}
+            initialViewState={bounds ? { bounds, fitBoundsOptions: { padding: 40 } } : { longitude: 0, latitude: 20, zoom: 1 }}
+            interactiveLayerIds={interactive}
+            onMouseMove={onMove}
+            onMouseLeave={() => setHover(null)}
+            onClick={onClick}
+            cursor={hovered.current ? "pointer" : "grab"}
+            onLoad={markMapReady}
+          >
+            <NavigationControl position="top-left" showCompass={false} />
+            <ScaleControl position="bottom-right" unit={areaUnit.includes("ft") ? "imperial" : "metric"} />
+            <FabricLayers layers={layers} hidden={hidden} colouring={colouring} />
+          </Map>
+        )}
         {parcelLayers.length > 0 && <MapLegend colouring={colouring} valueUnit={areaUnit} />}
         {selected && <ParcelCard parcel={selected} areaUnit={areaUnit} onClose={() => setSelected(null)} />}
       </div>
