@@ -1,4 +1,5 @@
 import { and, asc, eq, sql } from "drizzle-orm";
+import type { CheckAcceptance } from "~/calculations/check-acceptances";
 import { alternatives, alternativeVersions, projectMembers } from "~/db/schema";
 import type { AlignmentInput } from "~/geometry/alignment-types";
 import type { CorridorInput } from "~/geometry/take-types";
@@ -10,10 +11,12 @@ import { recordAuditEvent } from "./audit.server";
 type Row = typeof alternatives.$inferSelect;
 
 /** An alternative with its JSON columns typed as the engine's contracts. */
-export type Alternative = Omit<Row, "alignment" | "corridor" | "rules"> & {
+export type Alternative = Omit<Row, "alignment" | "corridor" | "rules" | "acceptedChecks"> & {
   alignment: AlignmentInput;
   corridor: CorridorInput;
   rules: TakeRulesOverrides;
+  /** Each stamped by the server with who accepted it and when (see stampAcceptances). */
+  acceptedChecks: CheckAcceptance[];
 };
 
 /** The inputs a planner edits; everything a take result depends on, except the land layers. */

@@ -2,6 +2,8 @@ import { z } from "zod";
 import { AlignmentSchema } from "./alignment-schemas";
 import { CorridorSchema, TakeRulesSchema } from "./take-schemas";
 
+// Not strict: a client may send back the `acceptedBy`/`acceptedAt` it read, and they are dropped here.
+// Only the server stamps who accepted a check and when (stampAcceptances, in the save service).
 const AcceptedCheckSchema = z.object({
   id: z.string().min(1).max(120),
   reason: z.string().trim().min(3, "Give a reason for accepting the check.").max(2000),
