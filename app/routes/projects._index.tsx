@@ -1,5 +1,7 @@
+import { useEffect } from "react";
 import { Link, useLoaderData } from "react-router";
 import type { Route } from "./+types/projects._index";
+import { warmMapLibWhenIdle } from "~/components/map/map-lib";
 import { buttonClass } from "~/components/ui/button";
 import { Card } from "~/components/ui/card";
 import { Table } from "~/components/ui/table";
@@ -18,6 +20,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export default function Projects() {
+  // A project opens on its map: have MapLibre ready by then.
+  useEffect(() => warmMapLibWhenIdle(), []);
   const { projects, mayCreate } = useLoaderData<typeof loader>();
   return (
     <div className="space-y-6">

@@ -1,6 +1,8 @@
+import { useEffect } from "react";
 import { z } from "zod";
 import type { Route } from "./+types/work";
 import { ACQUISITION_STATUSES } from "~/calculations/acquisition-status";
+import { warmMapLibWhenIdle } from "~/components/map/map-lib";
 import { Card } from "~/components/ui/card";
 import { Notice } from "~/components/ui/notice";
 import { WorkFilters } from "~/components/parcel-work/work-filters";
@@ -42,6 +44,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 /** The land agent's home: only their parcels, each linking to its page with the map and history. */
 export default function WorkList({ loaderData }: Route.ComponentProps) {
+  // Each parcel opens on a map: have MapLibre ready by then.
+  useEffect(() => warmMapLibWhenIdle(), []);
   const { name, total, rows, projects, values } = loaderData;
   const units = rows[0]?.units ?? "m";
   const sameUnits = rows.every((r) => r.units === units);

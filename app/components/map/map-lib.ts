@@ -20,8 +20,20 @@ export function browserMapLib() {
   return mapLib;
 }
 
-// Start fetching MapLibre as soon as a page with a map has loaded its code, not when it renders.
-browserMapLib();
+/**
+ * Fetches, compiles and starts MapLibre (and its worker) while the browser is idle, on pages
+ * from which a map is one click away (the project list, the work list): the map page then
+ * finds it ready. Returns the cancel for an effect's clean-up.
+ */
+export function warmMapLibWhenIdle(): () => void {
+  if (typeof window === "undefined") return () => undefined;
+  if (typeof window.requestIdleCallback !== "function") {
+    const timer = window.setTimeout(() => void browserMapLib(), 300);
+    return () => window.clearTimeout(timer);
+  }
+  const id = window.requestIdleCallback(() => void browserMapLib(), { timeout: 2000 });
+  return () => window.cancelIdleCallback(id);
+}
 
 /** Journeys wait for this flag before they look at the map (set when the style has loaded). */
 export function markMapReady(): void {
@@ -37,6 +49,7 @@ export function markMapReady(): void {
  */
 export function useSharedMapProps(styleUrl: string, fabric: MapLayerInfo[] = [], look: FabricLook = {}) {
   preloadMapResources(styleUrl);
+  const mapLib = browserMapLib(); // asked for at the first render, while the style is fetched
   const [base, setBase] = useState<StyleSpecification | "unavailable" | null>(null);
   useEffect(() => {
     let live = true;
@@ -51,5 +64,5 @@ export function useSharedMapProps(styleUrl: string, fabric: MapLayerInfo[] = [],
   const latest = useRef({ fabric, look });
   latest.current = { fabric, look };
   const mapStyle = useMemo(() => (base === null ? null : base === "unavailable" ? styleUrl : styleWithFabric(base, fabricSources(latest.current.fabric, latest.current.look))), [base, styleUrl]);
-  return mapStyle === null ? null : { mapLib: browserMapLib(), mapStyle, fadeDuration: 0, attributionControl: false as const };
+  return mapStyle === null ? null : { mapLib, mapStyle, fadeDuration: 0, attributionControl: false as const };
 }
