@@ -114,7 +114,7 @@ test("overriding the remnant threshold and the cost per parcel changes classific
   await expect(rules.getByLabel("Contingency (% of the other lines)", { exact: true }).inputValue()).resolves.toBe("30");
   await expect(page.getByTestId("total-estimatedCost").textContent()).resolves.toBe(formatCost(PARTIAL(12_000)));
 
-  const admin = rules.getByLabel("Appraisal, title and closing (per parcel)", { exact: true });
+  const admin = rules.getByLabel("Appraisal, title and closing (currency per parcel with a take)", { exact: true });
   await admin.fill("20000");
   await admin.press("Enter");
   await page.getByTestId("total-estimatedCost").filter({ hasText: formatCost(PARTIAL(20_000)) }).waitFor({ timeout: 30_000 });
@@ -123,7 +123,7 @@ test("overriding the remnant threshold and the cost per parcel changes classific
 
   // Each lot keeps two 3 000 m² pieces: under a 3 500 m² threshold both are uneconomic remnants, so
   // every take is full (49 CFR 24.102(k); the threshold is the project's own, common practice).
-  const remnant = rules.getByLabel("Uneconomic remnant: remainder under this area (m²)", { exact: true });
+  const remnant = rules.getByLabel("Smallest usable remainder (m²)", { exact: true });
   await remnant.fill("3500");
   await remnant.press("Enter");
   await page.getByTestId("total-parcelsAffected").filter({ hasText: "4 (0 partial, 4 full)" }).waitFor({ timeout: 30_000 });
@@ -135,7 +135,7 @@ test("overriding the remnant threshold and the cost per parcel changes classific
   expect(saved.summary.fullTakes).toBe(4);
   expect(saved.summary.estimatedCost).toBeCloseTo(FULL(20_000), 6);
 
-  await rules.getByRole("button", { name: "Clear the override of uneconomic remnant: remainder under this area" }).click();
+  await rules.getByRole("button", { name: "Clear the override of smallest usable remainder" }).click();
   await page.getByTestId("total-parcelsAffected").filter({ hasText: "4 (4 partial, 0 full)" }).waitFor({ timeout: 30_000 });
   await waitForPreview(page);
   await expect(page.getByTestId("total-estimatedCost").textContent()).resolves.toBe(formatCost(PARTIAL(20_000)));

@@ -1,6 +1,7 @@
 import { resolveTakeRules } from "~/calculations/take-rules";
 import type { TakeRules } from "~/geometry/take-types";
-import { areaUnitLabel, lengthUnitLabel, type Units } from "./format";
+import { describeRule } from "~/components/projects/take-rule-labels";
+import type { Units } from "./format";
 
 export type RuleKey = keyof TakeRules;
 export type RuleOverrides = Partial<TakeRules>;
@@ -16,18 +17,27 @@ export interface RuleField {
   max: number;
 }
 
-/** Every take and cost rule with its unit and the limits of TakeRulesSchema (app/schemas/take-schemas.ts). */
-export const RULE_FIELDS: readonly RuleField[] = [
-  { key: "remnantMinArea", label: "Uneconomic remnant: remainder under this area", unit: areaUnitLabel, min: 0, max: 1e12 },
-  { key: "remnantMinFraction", label: "Uneconomic remnant: remainder under this fraction of the parcel", unit: () => "fraction, 0–1", min: 0, max: 1 },
-  { key: "landValuePerArea", label: "Land value where a parcel has none", unit: (u) => `per ${areaUnitLabel(u)}`, min: 0, max: 1e12 },
-  { key: "buildingValue", label: "Value of a displaced building where it has none", unit: () => "per building", min: 0, max: 1e12 },
-  { key: "severancePercent", label: "Severance damages on partial takes", unit: () => "% of land", min: 0, max: 1000 },
-  { key: "easementRatePerArea", label: "Construction easement rate", unit: (u) => `per ${areaUnitLabel(u)}`, min: 0, max: 1e12 },
-  { key: "adminCostPerParcel", label: "Appraisal, title and closing", unit: () => "per parcel", min: 0, max: 1e12 },
-  { key: "contingencyPercent", label: "Contingency", unit: () => "% of the other lines", min: 0, max: 1000 },
-  { key: "proximityDistance", label: "Building this close to the new line is a proximity impact", unit: lengthUnitLabel, min: 0, max: 10_000 },
-];
+/** Largest value TakeRulesSchema (app/schemas/take-schemas.ts) accepts for each rule; all start at 0. */
+const RULE_MAX: Record<RuleKey, number> = {
+  remnantMinArea: 1e12,
+  remnantMinFraction: 1,
+  landValuePerArea: 1e12,
+  buildingValue: 1e12,
+  severancePercent: 1000,
+  easementRatePerArea: 1e12,
+  adminCostPerParcel: 1e12,
+  contingencyPercent: 1000,
+  proximityDistance: 10_000,
+};
+
+/** Every take and cost rule, worded and measured as the project page words them (`describeRule`), with its limits. */
+export const RULE_FIELDS: readonly RuleField[] = (Object.keys(RULE_MAX) as RuleKey[]).map((key) => ({
+  key,
+  label: describeRule(key, "m").label,
+  unit: (units: Units) => describeRule(key, units).unit,
+  min: 0,
+  max: RULE_MAX[key],
+}));
 
 export interface RuleRow {
   key: RuleKey;
