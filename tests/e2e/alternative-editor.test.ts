@@ -214,12 +214,17 @@ test("a design-check warning is accepted with a reason, which is saved with the 
   const warning = checks.locator("li").filter({ hasText: /PI 1: radius 150 is below the minimum/ });
   await warning.waitFor({ timeout: 20_000 });
   await expect(warning.textContent()).resolves.toContain("Source: AASHTO");
+  const started = Date.now();
   await warning.getByRole("button", { name: "Accept with a reason…" }).click();
   await page.getByLabel("Reason for going ahead").fill("Existing bridge abutment fixes the curve; posted advisory speed.");
   await page.getByRole("dialog").getByRole("button", { name: "Accept" }).click();
   await warning.getByText("accepted", { exact: true }).waitFor();
   await expect(checks.getByRole("button", { name: "Accept with a reason…" }).count()).resolves.toBe(warningsBefore);
-  const stored = async () => ((await readAlternative(target.id, cookie)) as unknown as { acceptedChecks: { id: string; reason: string }[] }).acceptedChecks;
-  await expect.poll(stored, { timeout: 20_000 }).toEqual([{ id: "min-radius:pi-1", reason: "Existing bridge abutment fixes the curve; posted advisory speed." }]);
+  const stored = async () => ((await readAlternative(target.id, cookie)) as unknown as { acceptedChecks: { id: string; reason: string; acceptedBy?: string; acceptedAt?: string }[] }).acceptedChecks;
+  await expect.poll(stored, { timeout: 20_000 }).toEqual([{ id: "min-radius:pi-1", reason: "Existing bridge abutment fixes the curve; posted advisory speed.", acceptedBy: "Tamsin Quorral", acceptedAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/) }]);
+  // The server stamps the demo planner (Tamsin Quorral, app/models/demo-accounts.ts) and the save time.
+  const acceptedAt = Date.parse((await stored())[0]!.acceptedAt!);
+  expect(acceptedAt).toBeGreaterThanOrEqual(started);
+  expect(acceptedAt).toBeLessThanOrEqual(Date.now());
   await page.context().close();
 });
