@@ -43,6 +43,11 @@ async function stored(id: number): Promise<Stored> {
   return (await res.json()) as Stored;
 }
 
+/** Lets the clock move past the last stamp's millisecond, so a restamp is told apart from a kept stamp. */
+function passMillisecond(): Promise<void> {
+  return new Promise((r) => setTimeout(r, 5));
+}
+
 /** Runs `act` and checks `acceptedAt` is an ISO 8601 UTC instant inside the time it took. */
 async function expectStampedDuring(act: () => Promise<Acceptance | undefined>): Promise<Acceptance> {
   const before = Date.now();
@@ -70,6 +75,7 @@ test("a check accepted through PUT is stamped with the planner's name and the ti
 test("a later save that keeps the acceptance unchanged keeps its original stamp, and one that forges a stamp is ignored", async () => {
   const alt = await createBend("Kept bend");
   const first = (await save(alt.id, { version: alt.version, acceptedChecks: [{ id: CHECK, reason: REASON }] })).acceptedChecks;
+  await passMillisecond();
   // Another edit sends the acceptance back as the editor does (no stamp): the stamp stays.
   const kept = await save(alt.id, { version: alt.version + 1, corridor: { left: 16, right: 16 }, acceptedChecks: [{ id: CHECK, reason: REASON }] });
   expect(kept.acceptedChecks).toEqual(first);
@@ -89,8 +95,7 @@ test("a new acceptance sent with a forged stamp gets the signed-in planner's sta
 test("changing the reason restamps the acceptance", async () => {
   const alt = await createBend("Restamped bend");
   const first = (await save(alt.id, { version: alt.version, acceptedChecks: [{ id: CHECK, reason: REASON }] })).acceptedChecks[0]!;
-  // Let the clock move past the first stamp's millisecond so a restamp is told apart from a kept one.
-  await new Promise((r) => setTimeout(r, 5));
+  await passMillisecond();
   const newReason = "Design speed lowered to 50 km/h through the bridge approach.";
   const again = await expectStampedDuring(async () => (await save(alt.id, { version: alt.version + 1, acceptedChecks: [{ id: CHECK, reason: newReason }] })).acceptedChecks[0]);
   expect(again.reason).toBe(newReason);
