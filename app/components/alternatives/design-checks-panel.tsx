@@ -35,7 +35,7 @@ export function DesignChecksPanel({ checks, stale, editable, onAccept, onWithdra
               {c.accepted ? <Badge tone="info">accepted</Badge> : <Badge tone="caution">warning</Badge>}
             </div>
             <p className="mt-1 text-xs text-ink-soft">Source: {c.source}</p>
-            {c.accepted && <p className="mt-1 text-xs">Reason given: “{c.accepted.reason}”</p>}
+            {c.accepted && <p className="mt-1 text-xs">Reason given: “{c.accepted.reason}”{acceptedByline(c.accepted)}</p>}
             {editable && (
               <div className="mt-2">
                 {c.accepted ? (
@@ -72,4 +72,11 @@ function AcceptDialog({ check, onClose, onAccept }: { check: ReviewedCheck | nul
       </form>
     </Dialog>
   );
+}
+
+/** "— Name, 2 Dec 2026" once the server has stamped the acceptance (on save; a reload shows it). */
+function acceptedByline(a: NonNullable<ReviewedCheck["accepted"]>): string {
+  if (!a.acceptedBy) return "";
+  const day = a.acceptedAt ? new Date(a.acceptedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" }) : "";
+  return ` — ${a.acceptedBy}${day ? `, ${day}` : ""}`;
 }
