@@ -2,6 +2,7 @@ import { startFakeSmtp } from "./fake-smtp.server";
 import { db } from "./db.server";
 import { env, isDevOrDemo } from "./env.server";
 import { startMailSender } from "./mail-sender.server";
+import { warmLayerTilesInBackground } from "~/models/layer-tile-warmup.server";
 import { createMailTransport } from "./mail-transport.server";
 
 type Services = { fakeSmtpPort: number | null };
@@ -22,7 +23,8 @@ const globalForBoot = globalThis as unknown as { takelineBoot?: Promise<Services
 
 /**
  * Starts what the web app needs once per process: migrations, the fake SMTP server in
- * development and demo mode, and the outbox sender loop.
+ * development and demo mode, the outbox sender loop, and the background warm-up of the tiles
+ * project maps open on.
  */
 export function bootServices(): Promise<Services> {
   globalForBoot.takelineBoot ??= (async () => {
@@ -42,8 +44,10 @@ export function bootServices(): Promise<Services> {
       throw new Error("SMTP_URL must be set in production (or run with TAKELINE_DEMO=1)");
     }
     const stopSender = startMailSender(transport, e.MAIL_POLL_MS);
+    const stopWarmup = warmLayerTilesInBackground();
     stopOnSignal(async () => {
       stopSender();
+      stopWarmup();
       transport.close();
       await fake?.close();
     });
