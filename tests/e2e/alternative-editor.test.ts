@@ -226,5 +226,7 @@ test("a design-check warning is accepted with a reason, which is saved with the 
   const acceptedAt = Date.parse((await stored())[0]!.acceptedAt!);
   expect(acceptedAt).toBeGreaterThanOrEqual(started);
   expect(acceptedAt).toBeLessThanOrEqual(Date.now());
+  // Once saved, the warning names who accepted it, without a reload.
+  await warning.getByText(/— Tamsin Quorral, \d{1,2} \w{3} \d{4}/).waitFor({ timeout: 20_000 });
   await page.context().close();
 });

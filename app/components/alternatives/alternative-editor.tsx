@@ -5,6 +5,7 @@ import type { MapLayerInfo } from "~/components/map/project-map";
 import { createWorkingCrs, type Xy } from "~/components/map/working-crs";
 import { Card } from "~/components/ui/card";
 import { applyCheckAcceptances } from "~/calculations/check-acceptances";
+import { withSavedStamps } from "./acceptance-stamps";
 import { AffectedParcels } from "./affected-parcels";
 import type { CorridorInput, CorridorWidthRange } from "~/geometry/take-types";
 import type { AlternativeDraft, AlternativeJson, PreviewResult } from "./api-types";
@@ -71,7 +72,8 @@ export function AlternativeEditor({ alternative, projectId, projectName, layers,
   }), [edits, result, preview.error]);
   const summary = result?.summary ?? alternative.summary ?? null;
   // The preview reviews checks against the saved acceptances; show the draft's own at once.
-  const reviewed = useMemo(() => (result ? applyCheckAcceptances(result.checks.map(({ accepted: _, ...c }) => c), editor.draft.acceptedChecks) : { checks: [], stale: [] }), [result, editor.draft.acceptedChecks]);
+  const acceptances = useMemo(() => withSavedStamps(editor.draft.acceptedChecks, autosave.savedAcceptances), [editor.draft.acceptedChecks, autosave.savedAcceptances]);
+  const reviewed = useMemo(() => (result ? applyCheckAcceptances(result.checks.map(({ accepted: _, ...c }) => c), acceptances) : { checks: [], stale: [] }), [result, acceptances]);
   const extent = useMemo(() => stationExtentOf(result), [result]);
   const draft = editor.draft;
 

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import { saveDraft } from "./api-client";
-import type { AlternativeDraft } from "./api-types";
+import type { AlternativeDraft, CheckAcceptance } from "./api-types";
 
 /** Quiet time after the last edit before it is saved. */
 export const AUTOSAVE_DELAY_MS = 800;
@@ -21,6 +21,8 @@ export type SaveState =
  */
 export function useAutosave(alternativeId: number, initialVersion: number, draft: AlternativeDraft, enabled: boolean) {
   const [state, setState] = useState<SaveState>({ kind: "saved", version: initialVersion });
+  // The acceptances as the server stored (and stamped) them in the last save.
+  const [savedAcceptances, setSavedAcceptances] = useState<CheckAcceptance[] | null>(null);
   const version = useRef(initialVersion);
   const saved = useRef(draft);
   const latest = useRef(draft);
@@ -41,6 +43,7 @@ export function useAutosave(alternativeId: number, initialVersion: number, draft
         if (outcome.ok) {
           version.current = outcome.value.version;
           saved.current = sending;
+          setSavedAcceptances(outcome.value.acceptedChecks ?? null);
           setState({ kind: latest.current === sending ? "saved" : "unsaved", version: version.current });
           return true;
         }
@@ -78,5 +81,5 @@ export function useAutosave(alternativeId: number, initialVersion: number, draft
     if (timer.current) clearTimeout(timer.current);
   }, []);
 
-  return { state, flush: save };
+  return { state, flush: save, savedAcceptances };
 }
