@@ -37,14 +37,21 @@ export function stationTextOf(geometry: AlignmentGeometry): (internalStation: nu
 }
 
 /** The parcel's take and geometry, or undefined when the alternative takes no right-of-way from it. */
-export function findParcelTake(sources: AlternativeSources, parcelId: string): { take: ParcelTake; parcel: TakeParcelInput } | undefined {
+function findParcelTake(sources: AlternativeSources, parcelId: string): { take: ParcelTake; parcel: TakeParcelInput } | undefined {
   const take = sources.impacts.parcels.find((p) => p.parcelId === parcelId);
   const parcel = sources.parcels.get(parcelId);
   return take && parcel && take.takeArea > 0 ? { take, parcel } : undefined;
 }
 
+/** The parcel's take, geometry and legal description, or undefined when the alternative takes no right-of-way from it. */
+export function describedParcelTake(sources: AlternativeSources, parcelId: string): { take: ParcelTake; parcel: TakeParcelInput; description: TakeDescription } | undefined {
+  const found = findParcelTake(sources, parcelId);
+  const description = found ? describeParcelTake(sources, found.take, found.parcel) : null;
+  return found && description ? { ...found, description } : undefined;
+}
+
 /** The legal description of one parcel's take (null when the right-of-way takes none of it). */
-export function describeParcelTake(sources: AlternativeSources, take: ParcelTake, parcel: TakeParcelInput): TakeDescription | null {
+function describeParcelTake(sources: AlternativeSources, take: ParcelTake, parcel: TakeParcelInput): TakeDescription | null {
   return describeTake({
     elements: sources.geometry.elements,
     corridor: sources.alternative.corridor,

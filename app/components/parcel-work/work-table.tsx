@@ -1,22 +1,17 @@
 import { Link } from "react-router";
 import { Table } from "~/components/ui/table";
 import type { AcquisitionStatus } from "~/calculations/acquisition-status";
+import type { ParcelListRow } from "~/calculations/parcel-list-csv";
 import { areaLabel, formatArea, formatDay, formatEstimate, type Units } from "./figures";
 import { StatusBadge } from "./status-badge";
 
-export interface WorkRow {
+/** A case on the agent's work list: the parcel's line of their parcel list, and where the case stands. */
+export interface WorkRow extends Omit<ParcelListRow, "stationFrom" | "stationTo"> {
   caseId: number;
   projectName: string;
   alternativeName: string;
   version: number;
   units: Units;
-  parcelId: string;
-  owner: string | null;
-  address: string | null;
-  takeArea: number;
-  remainderArea: number;
-  classification: "partial" | "full";
-  estimatedCost: number;
   status: AcquisitionStatus;
   state: "open" | "released";
   assignedAt: string | null;
