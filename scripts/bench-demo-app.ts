@@ -11,8 +11,8 @@ import type { Browser, Page } from "playwright-core";
 
 export const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 export const DEMO_PASSWORD = "takeline-demo";
-/** The build to run (`BENCH_BUILD_DIR`, default `build`): a copy under the repository lets a benchmark run while the code is rebuilt. */
-const BUILD_DIR = process.env.BENCH_BUILD_DIR ?? "build";
+/** The production build; its server serves the client files from `build/client` under the working directory, so it must be this one. */
+const BUILD_DIR = "build";
 
 export interface DemoApp {
   base: string;

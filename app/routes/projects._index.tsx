@@ -1,7 +1,7 @@
 import { useEffect } from "react";
 import { Link, useLoaderData } from "react-router";
 import type { Route } from "./+types/projects._index";
-import { warmMapLibWhenIdle } from "~/components/map/map-lib";
+import { warmMapLibWhenIdle } from "~/components/map/map-warmup";
 import { buttonClass } from "~/components/ui/button";
 import { Card } from "~/components/ui/card";
 import { Table } from "~/components/ui/table";

@@ -2,7 +2,7 @@ import { useEffect } from "react";
 import { z } from "zod";
 import type { Route } from "./+types/work";
 import { ACQUISITION_STATUSES } from "~/calculations/acquisition-status";
-import { warmMapLibWhenIdle } from "~/components/map/map-lib";
+import { warmMapLibWhenIdle } from "~/components/map/map-warmup";
 import { Card } from "~/components/ui/card";
 import { Notice } from "~/components/ui/notice";
 import { WorkFilters } from "~/components/parcel-work/work-filters";

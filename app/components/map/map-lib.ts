@@ -2,37 +2,24 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type { StyleSpecification } from "maplibre-gl";
 import { fabricSources, styleWithFabric, type FabricLook } from "./fabric-style";
 import { preloadMapResources } from "./map-preloads";
+import { maplibregl } from "./maplibre-with-worker.client";
 import type { MapLayerInfo } from "./project-map";
 
 let mapLib: Promise<typeof import("maplibre-gl")> | undefined;
 
 /**
- * MapLibre is loaded in the browser only, once; the server renders the map's frame without it.
- * Its web worker is started as soon as the library arrives (`prewarm`), so the worker's own
- * start-up overlaps the style request instead of following it.
+ * MapLibre in the browser, or undefined on the server (which renders the map's frame without
+ * it). It is a static import of the map pages, so the server-rendered page already asks for it
+ * (modulepreload) beside the page's own code, rather than after hydration. Its web worker is
+ * started at the first call (`prewarm`), so the worker's start-up overlaps the style request.
  */
 export function browserMapLib() {
-  if (typeof window === "undefined") return undefined;
-  mapLib ??= import("./maplibre-with-worker").then((m) => {
-    m.maplibregl.prewarm();
-    return m.maplibregl;
+  if (typeof window === "undefined" || !maplibregl) return undefined;
+  mapLib ??= Promise.resolve(maplibregl).then((m) => {
+    m.prewarm();
+    return m;
   });
   return mapLib;
-}
-
-/**
- * Fetches, compiles and starts MapLibre (and its worker) while the browser is idle, on pages
- * from which a map is one click away (the project list, the work list): the map page then
- * finds it ready. Returns the cancel for an effect's clean-up.
- */
-export function warmMapLibWhenIdle(): () => void {
-  if (typeof window === "undefined") return () => undefined;
-  if (typeof window.requestIdleCallback !== "function") {
-    const timer = window.setTimeout(() => void browserMapLib(), 300);
-    return () => window.clearTimeout(timer);
-  }
-  const id = window.requestIdleCallback(() => void browserMapLib(), { timeout: 2000 });
-  return () => window.cancelIdleCallback(id);
 }
 
 /** Journeys wait for this flag before they look at the map (set when the style has loaded). */

@@ -1,0 +1,11 @@
+import { signedInPage, startDemoApp } from "./bench-demo-app";
+const app = await startDemoApp();
+const page = await signedInPage(app, "manager@demo.test");
+page.on("console", (m) => console.log("console", m.type(), m.text().slice(0, 300)));
+page.on("pageerror", (e) => console.log("pageerror", e.message));
+page.on("requestfailed", (r) => console.log("failed", r.url()));
+page.on("response", (r) => { if (r.status() >= 400) console.log("status", r.status(), r.url()); });
+const url = (await page.getByRole("link", { name: "Quillmere Eastern Bypass" }).getAttribute("href"))!;
+await page.goto(url);
+await page.waitForTimeout(4000);
+await app.stop();
