@@ -14,7 +14,7 @@ function inputs(points: EvaluationInputs["alignment"]["points"], acceptedChecks:
   return { alignment: { units: "m", startStation: 0, points }, corridor: { left: 10, right: 10 }, rules: defaultTakeRules("m"), design: { designSpeed: 30, speedUnit: "km/h" }, acceptedChecks };
 }
 
-test("a corridor that crosses itself is a warning beside the design checks, with the area counted twice", () => {
+test("a corridor that crosses itself is a warning beside the design checks, and the ground both legs cover is taken once", () => {
   const crossing = inputs([at(0, 0), at(1000, 0), at(1000, 400), at(500, -400)]);
   const evaluation = evaluateAlternative(crossing, createTakeSession([square(750, 0)]));
   const check = evaluation.checks.find((c) => c.id === "corridor-self-overlap-1");
@@ -22,9 +22,14 @@ test("a corridor that crosses itself is a warning beside the design checks, with
   const doubled = (20 * 20) / (800 / Math.hypot(500, 800));
   expect(check?.severity).toBe("warning");
   expect(check?.value).toBeCloseTo(doubled, 6);
-  // The parcel holds the whole crossing: its take is the union of both strips plus the doubled parallelogram.
+  // The parcel holds the whole crossing: its take is both strips less the parallelogram they share
+  // (leg 0 crosses it side to side, leg 2 top to bottom: W · 100 and W · 100 / sin θ, closed form).
   const strips = 100 * 20 + 20 * (100 / (800 / Math.hypot(500, 800)));
-  expect(evaluation.takes.parcels[0]!.takeArea).toBeCloseTo(strips, 6);
+  const take = evaluation.takes.parcels[0]!;
+  expect(take.takeArea).toBeCloseTo(strips - doubled, 6);
+  // The two strips cut the square into four corners, which together are what is left.
+  expect(take.remainderPieces).toBe(4);
+  expect(take.remainderPieceAreas.reduce((s, a) => s + a, 0)).toBeCloseTo(100 * 100 - (strips - doubled), 6);
   expect(evaluation.takes.warnings.some((w) => w.includes("same ground twice"))).toBe(true);
   expect(evaluation.summary.checkWarnings).toBeGreaterThanOrEqual(1);
 });

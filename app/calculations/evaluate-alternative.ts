@@ -36,8 +36,9 @@ export function evaluateAlternative(inputs: EvaluationInputs, takes: TakeCompute
 }
 
 /**
- * A corridor that covers the same ground twice is a warning beside the design checks: its takes
- * there are counted twice, so the planner must see it where they review the design.
+ * A corridor that covers the same ground twice is a warning beside the design checks: that ground
+ * is taken once, but a right-of-way that comes back on itself is seldom meant, so the planner must
+ * see it where they review the design.
  */
 export function selfOverlapChecks(result: TakeResult): DesignCheckResult[] {
   return (result.corridorSelfOverlaps ?? []).map((o, k) => ({

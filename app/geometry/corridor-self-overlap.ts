@@ -19,28 +19,41 @@ const OVERLAP_CHORD_TOLERANCE = 1e-3;
 /** Overlaps smaller than this (square units) are touching, not overlapping. */
 const OVERLAP_MIN_AREA = 1e-3;
 
-/**
- * Where the right-of-way covers the same ground twice. Pieces of one element never overlap
- * (a tangent's quads lie between perpendiculars, an arc's slices in disjoint sectors of its
- * centre) and neighbours share an edge, so only other pairs whose bounds meet are tested: first
- * by the separating axis theorem on convex hulls that contain each piece, and only when those
- * overlap, by clipping the two pieces. A valid alignment in open country finds none quickly.
- */
+/** Two pieces (by their `index`, i < j) that cover the same ground, and how much. */
+export interface OverlappingPieces {
+  i: number;
+  j: number;
+  area: number;
+}
+
+/** Where the right-of-way covers the same ground twice, as stretches of stations. */
 export function findCorridorSelfOverlaps(corridor: Corridor): CorridorSelfOverlap[] {
+  return mergeOverlapRuns(findOverlappingPieces(corridor), corridor.pieces);
+}
+
+/**
+ * The pairs of pieces that overlap. Pieces of one element never overlap (a tangent's quads lie
+ * between perpendiculars, an arc's slices in disjoint sectors of its centre) and neighbours
+ * share an edge, so only other pairs whose bounds meet are tested: first by the separating axis
+ * theorem on convex hulls that contain each piece, and only when those overlap, by clipping the
+ * two pieces. A valid alignment in open country finds none quickly. `corridor.pieces` may be any
+ * stretch of a corridor's pieces, in station order.
+ */
+export function findOverlappingPieces(corridor: Pick<Corridor, "pieces">): OverlappingPieces[] {
   const pieces = corridor.pieces;
   const index = indexBounds(pieces.map((p) => p.bounds));
   const hulls = new Map<number, Vec2[]>();
   const hullOf = (i: number) => hulls.get(i) ?? hulls.set(i, containingHull(pieces[i]!)).get(i)!;
-  const found: { i: number; j: number; area: number }[] = [];
+  const found: OverlappingPieces[] = [];
   for (let i = 0; i < pieces.length; i++) {
     for (const j of index.search(pieces[i]!.bounds)) {
-      if (j <= i + 1 || pieces[j]!.elementIndex === pieces[i]!.elementIndex) continue;
+      if (pieces[j]!.index <= pieces[i]!.index + 1 || pieces[j]!.elementIndex === pieces[i]!.elementIndex) continue;
       if (!convexPolygonsOverlap(hullOf(i), hullOf(j))) continue;
       const area = intersectionArea(pieces, i, j);
-      if (area > OVERLAP_MIN_AREA) found.push({ i, j, area });
+      if (area > OVERLAP_MIN_AREA) found.push({ i: pieces[i]!.index, j: pieces[j]!.index, area });
     }
   }
-  return mergeRuns(found, pieces);
+  return found;
 }
 
 /** A convex polygon containing the piece: its corners, and for an arc the tangents' meeting points outside it. */
@@ -78,9 +91,9 @@ function shoelace(r: [number, number][]): number {
 }
 
 /** Joins overlapping piece pairs whose pieces follow on from each other into one stretch pair each. */
-function mergeRuns(pairs: { i: number; j: number; area: number }[], pieces: CorridorPiece[]): CorridorSelfOverlap[] {
+export function mergeOverlapRuns(pairs: OverlappingPieces[], pieces: CorridorPiece[]): CorridorSelfOverlap[] {
   const runs: { i0: number; i1: number; j0: number; j1: number; area: number }[] = [];
-  for (const { i, j, area } of pairs.sort((a, b) => a.i - b.i || a.j - b.j)) {
+  for (const { i, j, area } of [...pairs].sort((a, b) => a.i - b.i || a.j - b.j)) {
     const run = runs.find((r) => i <= r.i1 + 1 && j >= r.j0 - 1 && j <= r.j1 + 1);
     if (run) Object.assign(run, { i1: Math.max(run.i1, i), j0: Math.min(run.j0, j), j1: Math.max(run.j1, j), area: run.area + area });
     else runs.push({ i0: i, i1: i, j0: j, j1: j, area });

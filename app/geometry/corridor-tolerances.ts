@@ -11,6 +11,13 @@ export const SPIRAL_FIT_TOLERANCE = 0.0005;
 /** Sagitta of the arcs of the local corridor polygon used to count remainder pieces: 0.5 mm. */
 export const REMAINDER_CHORD_TOLERANCE = 0.0005;
 
+/**
+ * Sagitta of the chorded pieces on which ground the right-of-way covers twice (a leg crossing or
+ * closing in on an earlier one) is measured, to be taken once: 0.5 mm. Each chord's segment is
+ * put back, so this bounds only the error of chords cut short where lines cross an arc.
+ */
+export const OVERLAP_CHORD_TOLERANCE = 0.0005;
+
 /** Default sagitta of display outlines and take polygons: 1 cm (common practice, as `DEFAULT_CHORD_TOLERANCE_M`). */
 export const DISPLAY_CHORD_TOLERANCE = 0.01;
 

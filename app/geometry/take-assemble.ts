@@ -1,7 +1,8 @@
-import { findCorridorSelfOverlaps, type CorridorSelfOverlap } from "./corridor-self-overlap";
+import { mergeOverlapRuns, type CorridorSelfOverlap, type OverlappingPieces } from "./corridor-self-overlap";
 import type { Corridor, CorridorPiece } from "./corridor-types";
 import { OVERLAP_WARNING_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
 import { classifyTake, costTake } from "./take-costs";
+import { groundCoveredAgain } from "./take-overlap";
 import type { ParcelMeasure } from "./take-parcel";
 import type { PreparedShape } from "./take-shapes";
 import { spanStations } from "./take-span";
@@ -27,6 +28,9 @@ export interface MeasuredParcel {
 
 interface AssembleInput {
   row: Corridor;
+  /** The right-of-way's and the easement's (widened) pieces that overlap each other. */
+  rowPairs: OverlappingPieces[];
+  widePairs: OverlappingPieces[];
   parcels: TakeParcelInput[];
   parcelShapes: PreparedShape[];
   measures: Map<number, MeasuredParcel>;
@@ -54,20 +58,21 @@ export function assembleTakeResult(a: AssembleInput): TakeResult {
   const takes = [...included].map((i) => parcelTake(a, i, byParcel.get(i) ?? []));
   takes.sort((x, y) => x.stationFrom - y.stationFrom || (x.parcelId < y.parcelId ? -1 : x.parcelId > y.parcelId ? 1 : 0));
   const sumTake = takes.reduce((s, t) => s + t.takeArea, 0);
-  if (sumTake > a.row.area + OVERLAP_WARNING_AREA) {
-    warnings.push(`Parcels overlap inside the corridor: their takes add up to ${roundForMessage(sumTake - a.row.area)} square units more than the right-of-way's area.`);
+  const corridorArea = groundArea(a.row, a.rowPairs);
+  if (sumTake > corridorArea + OVERLAP_WARNING_AREA) {
+    warnings.push(`Parcels overlap inside the corridor: their takes add up to ${roundForMessage(sumTake - corridorArea)} square units more than the right-of-way's area.`);
   }
-  const selfOverlaps = findCorridorSelfOverlaps(a.row);
+  const selfOverlaps = mergeOverlapRuns(a.rowPairs, a.row.pieces);
   for (const o of selfOverlaps) warnings.push(selfOverlapMessage(o));
   const withTake = takes.filter((t) => t.takeArea > TAKE_MIN_AREA);
   return {
-    corridorArea: a.row.area,
-    easementArea: a.row.easementArea,
+    corridorArea,
+    easementArea: a.row.easement ? Math.max(0, groundArea(a.row.easement, a.widePairs) - corridorArea) : 0,
     parcels: takes,
     totals: {
       parcelTakeArea: sumTake,
       parcelEasementArea: takes.reduce((s, t) => s + t.easementArea, 0),
-      unparcelledArea: Math.max(0, a.row.area - sumTake),
+      unparcelledArea: Math.max(0, corridorArea - sumTake),
       parcelsAffected: takes.length,
       fullTakes: withTake.filter((t) => t.classification === "full").length,
       partialTakes: withTake.filter((t) => t.classification === "partial").length,
@@ -80,10 +85,17 @@ export function assembleTakeResult(a: AssembleInput): TakeResult {
   };
 }
 
+/** The ground a corridor covers: the sum of its pieces less what overlapping pieces cover again. */
+function groundArea(c: Corridor, pairs: OverlappingPieces[]): number {
+  if (pairs.length === 0) return c.area;
+  const overlapping = [...new Set(pairs.flatMap((p) => [p.i, p.j]))].sort((x, y) => x - y);
+  return c.area - groundCoveredAgain(overlapping.map((k) => c.pieces[k]!));
+}
+
 /** Stations here are internal (start station + distance), the engine's own. */
 export function selfOverlapMessage(o: CorridorSelfOverlap): string {
   const range = (r: [number, number]) => `${roundForMessage(r[0])}–${roundForMessage(r[1])}`;
-  return `The right-of-way covers the same ground twice (about ${roundForMessage(o.area)} square units) between internal stations ${range(o.first)} and ${range(o.second)}: takes there are counted twice. Move the alignment apart there or narrow the corridor.`;
+  return `The right-of-way covers the same ground twice (about ${roundForMessage(o.area)} square units) between internal stations ${range(o.first)} and ${range(o.second)}: that ground is taken once, but check that the alignment is meant to come back on itself there.`;
 }
 
 function parcelTake(a: AssembleInput, i: number, found: BuildingFinding[]): ParcelTake {

@@ -1,6 +1,7 @@
 import { boundsOverlap } from "./corridor-pieces";
 import { SLIVER_AREA, TAKE_MIN_AREA } from "./corridor-tolerances";
 import type { CorridorPiece } from "./corridor-types";
+import { multiplyCoveredArea, NO_OVERLAPS, overlappingAmong, type PieceOverlaps } from "./take-overlap";
 import { polygonPieceArea } from "./take-piece-area";
 import { remainderPieceAreas } from "./take-remainder";
 import type { PreparedShape } from "./take-shapes";
@@ -22,18 +23,19 @@ export interface ParcelMeasure {
 /**
  * Exact take and easement areas of a parcel, its remainder pieces and station span. `row` and
  * `wide` are the right-of-way and widened (easement) pieces whose bounds meet the parcel's; `all`
- * is the whole right-of-way (for the corridor boundary when the remainder splits).
+ * is the whole right-of-way (for the corridor boundary when the remainder splits). `overlaps`
+ * name the pieces of each that cover the same ground as others, so that ground is taken once.
  */
-export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: CorridorPiece[] | null, all: CorridorPiece[]): ParcelMeasure {
-  const rowAreas = pieceAreas(shape, row);
+export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: CorridorPiece[] | null, all: CorridorPiece[], overlaps: { row: PieceOverlaps; wide: PieceOverlaps } = { row: NO_OVERLAPS, wide: NO_OVERLAPS }): ParcelMeasure {
+  const rowAreas = pieceAreas(shape, row, overlaps.row);
   const takeArea = clampArea(rowAreas.total, shape.area);
-  const wideAreas = wide ? pieceAreas(shape, wide) : null;
+  const wideAreas = wide ? pieceAreas(shape, wide, overlaps.wide) : null;
   const easementArea = wideAreas ? Math.max(0, clampArea(wideAreas.total, shape.area) - takeArea) : 0;
   const pieces: number[] = [];
   if (takeArea > TAKE_MIN_AREA) {
     shape.polygons.forEach((polygon, i) => {
       const near = row.filter((p) => boundsOverlap(p.bounds, polygon.bounds));
-      pieces.push(...remainderPieceAreas(polygon, rowAreas.perPolygon[i]!, near, all));
+      pieces.push(...remainderPieceAreas(polygon, rowAreas.perPolygon[i]!, near, all, rowAreas.coveredTwice[i]));
     });
     pieces.sort((a, b) => b - a);
   } else {
@@ -44,8 +46,12 @@ export function measureParcel(shape: PreparedShape, row: CorridorPiece[], wide: 
   return { takeArea, easementArea, remainderArea: Math.max(0, shape.area - takeArea), pieceAreas: pieces, span, spanOn: onRow ? "row" : "wide" };
 }
 
-/** Exact area of (shape ∩ pieces), in total and per polygon of the shape, and the stations it spans. */
-export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { total: number; perPolygon: number[]; span: RelativeSpan | null } {
+/**
+ * Exact area of (shape ∩ ∪ pieces), in total and per polygon of the shape, and the stations it
+ * spans. Each piece's share is exact; where `overlaps` says pieces near a polygon cover the same
+ * ground, what they count more than once is taken off again (`coveredTwice` marks that polygon).
+ */
+export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[], overlaps: PieceOverlaps = NO_OVERLAPS): { total: number; perPolygon: number[]; span: RelativeSpan | null; coveredTwice: boolean[] } {
   const polygons = shape.polygons;
   const perPolygon = new Array<number>(polygons.length).fill(0);
   let span: RelativeSpan | null = null;
@@ -66,7 +72,16 @@ export function pieceAreas(shape: PreparedShape, pieces: CorridorPiece[]): { tot
     // A piece the shape only touches must not stretch the span.
     if (inPiece > TAKE_MIN_AREA && along[0] <= along[1]) span = widen(span, k, along);
   }
-  return { total, perPolygon, span };
+  const coveredTwice = polygons.map((polygon, i) => {
+    if (overlaps.size === 0) return false;
+    const twice = overlappingAmong(pieces.filter((p) => boundsOverlap(p.bounds, polygon.bounds)), overlaps);
+    if (twice.length < 2) return false;
+    const excess = multiplyCoveredArea(polygon, twice);
+    perPolygon[i]! -= excess;
+    total -= excess;
+    return true;
+  });
+  return { total, perPolygon, span, coveredTwice };
 }
 
 /**

@@ -1,10 +1,12 @@
 import type { AlignmentElement } from "./alignment-types";
 import { buildCorridor, buildWidened, resolvePieceOptions } from "./corridor-build";
 import type { Corridor, CorridorPiece } from "./corridor-types";
+import { findOverlappingPieces, type OverlappingPieces } from "./corridor-self-overlap";
 import { assembleTakeResult, type BuildingFinding, type MeasuredParcel } from "./take-assemble";
 import { spanStations } from "./take-span";
 import { measureBuilding, findOwnerParcel, type BuildingMeasure } from "./take-buildings";
 import { createKeyInterner, indexBounds, type BoundsIndex } from "./take-index";
+import { pieceOverlaps, NO_OVERLAPS } from "./take-overlap";
 import { measureParcel, type ParcelMeasure } from "./take-parcel";
 import { requireTakeRules } from "./take-rules-check";
 import { prepareShape } from "./take-shapes";
@@ -81,6 +83,10 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
     const rowHitsOf = hitsByItem(row, parcelIndex);
     const wideHitsOf = wide ? hitsByItem(wide, parcelIndex) : new Map<number, CorridorPiece[]>();
     Object.assign(stats, { candidates: 0, measured: 0, reused: 0 });
+    // Ground the right-of-way (or the easement's outer line) covers twice is taken once.
+    const rowPairs: OverlappingPieces[] = findOverlappingPieces(row);
+    const widePairs: OverlappingPieces[] = wide ? findOverlappingPieces(wide) : [];
+    const overlaps = { row: pieceOverlaps(rowPairs), wide: wide ? pieceOverlaps(widePairs) : NO_OVERLAPS };
     const measures = new Map<number, MeasuredParcel>();
     for (const i of sortedKeys(wide ? wideHitsOf : rowHitsOf)) {
       const shape = parcelShapes[i]!;
@@ -91,14 +97,14 @@ export function createTakeSession(parcels: TakeParcelInput[], buildings: TakeBui
       let cached = parcelCache[i];
       if (cached?.key === key) stats.reused++;
       else {
-        cached = { key, value: measureParcel(shape, rowHits, wide ? wideHits : null, row.pieces) };
+        cached = { key, value: measureParcel(shape, rowHits, wide ? wideHits : null, row.pieces, overlaps) };
         parcelCache[i] = cached;
         stats.measured++;
       }
       measures.set(i, { measure: cached.value, row: rowHits, wide: wideHits });
     }
     const findings = buildings.length > 0 ? findBuildings(elements, corridor, rules, row) : [];
-    return assembleTakeResult({ row, parcels, parcelShapes, measures, findings, rules, buildingValue: (j) => buildings[j]!.value ?? rules.buildingValue });
+    return assembleTakeResult({ row, rowPairs, widePairs, parcels, parcelShapes, measures, findings, rules, buildingValue: (j) => buildings[j]!.value ?? rules.buildingValue });
   }
 
   function findBuildings(elements: AlignmentElement[], corridor: CorridorInput, rules: TakeRules, row: Corridor): BuildingFinding[] {

@@ -122,6 +122,6 @@ export interface TakeResult {
   totals: TakeTotals;
   /** Plain-language notes, e.g. parcels that overlap each other inside the corridor. */
   warnings: string[];
-  /** Stretches where the right-of-way covers the same ground twice (their takes are counted twice). */
+  /** Stretches where the right-of-way covers the same ground twice (that ground is taken once). */
   corridorSelfOverlaps: CorridorSelfOverlap[];
 }

@@ -13,7 +13,7 @@ import { readProjectLand, readProjectLandKey, type ProjectLand } from "./project
 import type { Project } from "./projects.server";
 
 /** Bump when the take engine's results change for the same inputs, so stored results are recomputed. */
-const TAKE_ENGINE_VERSION = 2;
+const TAKE_ENGINE_VERSION = 3; // 3: ground the right-of-way covers twice is taken once
 const SESSIONS_KEPT = 3;
 
 /** Take sessions by land key, most recently used last: the parsed fabric stays in memory between edits. */

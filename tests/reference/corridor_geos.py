@@ -11,7 +11,12 @@ corridor pieces.
 Job keys: elements, corridor {left, right, easement?, ranges?}, parcels [{id, polygons}] or
 parcelsFile (JSON array of the same, written by the caller), sagitta, unparcelled (bool), pieces
 (bool: areas of parcel - corridor per taken parcel),
-geosSagitta (optional coarser corridor timed as well), repeat (timing runs).
+geosSagitta (optional coarser corridor timed as well), repeat (timing runs), buffered (bool: the
+right-of-way is instead GEOS's own buffer of the densified centreline, flat caps and mitred joins,
+for equal constant half-widths -- a buffer is the union of the ground within the half-width, so
+it stays valid where the corridor comes back over itself and covers ground twice). Measured here,
+GEOS's buffer of a 1.8 km line is within a few hundredths of a square metre of the closed-form
+area (it does not converge further with finer chords), so compare lot-sized parcels with it.
 """
 import json
 import math
@@ -23,7 +28,7 @@ import warnings
 warnings.filterwarnings("ignore", message="STRtree will be changed")
 
 try:
-    from shapely.geometry import MultiPolygon, Polygon, box
+    from shapely.geometry import LineString, MultiPolygon, Polygon, box
     from shapely.ops import unary_union
     from shapely.prepared import prep
     from shapely.strtree import STRtree
@@ -124,6 +129,30 @@ def corridor_polygon(elements, corridor, sagitta):
     return poly
 
 
+def centreline(elements, sagitta):
+    """The centreline as points: tangent ends, and arcs sampled so that each chord's sagitta is below `sagitta`."""
+    pts = [tuple(elements[0]["start"])]
+    for e in elements:
+        if e["type"] == "tangent":
+            pts.append(tuple(e["end"]))
+            continue
+        cx, cy = e["center"]
+        radius = e["radius"]
+        delta = math.radians(e["deltaDeg"])
+        a0 = math.atan2(e["start"][1] - cy, e["start"][0] - cx)
+        n = max(2, int(math.ceil(abs(delta) / (2 * math.acos(1 - sagitta / radius)))))
+        pts += [(cx + radius * math.cos(a0 + delta * k / n), cy + radius * math.sin(a0 + delta * k / n)) for k in range(1, n + 1)]
+    return pts
+
+
+def buffered_corridor(elements, corridor, sagitta):
+    if corridor["left"] != corridor["right"] or corridor.get("ranges"):
+        sys.stderr.write("a buffered reference corridor needs equal constant half-widths\n")
+        sys.exit(5)
+    # cap_style 2 = flat, join_style 2 = mitre (shapely 1.8 and 2.x); a mitre limit of 100 keeps every angle point's corner.
+    return LineString(centreline(elements, sagitta)).buffer(corridor["left"], cap_style=2, join_style=2, mitre_limit=100.0)
+
+
 def widened(corridor, extra):
     out = {"left": corridor["left"] + extra, "right": corridor["right"] + extra}
     if corridor.get("ranges"):
@@ -195,7 +224,8 @@ def main():
     geoms = [parcel_geometry(p) for p in job["parcels"]]
     tree = Index(geoms)
     built = time.perf_counter() - t_build
-    row = corridor_polygon(job["elements"], job["corridor"], sag)
+    build = buffered_corridor if job.get("buffered") else corridor_polygon
+    row = build(job["elements"], job["corridor"], sag)
     out = {"corridorArea": row.area, "fabricSeconds": built}
     c = job["corridor"]
     widest = max([c["left"], c["right"]] + [r.get(k, 0) for r in c.get("ranges") or [] for k in ("left", "right")]) + (c.get("easement") or 0)
@@ -211,7 +241,7 @@ def main():
     out["candidates"] = len(set(i for b in boxes for i in tree.query_items(b)))
     e = job["corridor"].get("easement") or 0
     if e > 0:
-        wide = corridor_polygon(job["elements"], widened(job["corridor"], e), sag)
+        wide = build(job["elements"], widened(job["corridor"], e), sag)
         out["wideArea"] = wide.area
         out["wideTakes"] = overlay(wide, ids, geoms, tree, boxes)
     if job.get("geosSagitta"):
@@ -224,7 +254,7 @@ def main():
         out["coarseOverlaySeconds"] = sorted(times)[len(times) // 2]
         out["coarseMaxDiff"] = max(abs(coarse_takes.get(k, 0) - takes.get(k, 0)) for k in set(takes) | set(coarse_takes))
         out["coarseVertices"] = len(coarse.exterior.coords)
-    out["vertices"] = len(row.exterior.coords)
+    out["vertices"] = len(row.exterior.coords) if hasattr(row, "exterior") else sum(len(g.exterior.coords) for g in row.geoms)
     if job.get("pieces"):
         index = {pid: i for i, pid in enumerate(ids)}
         out["pieces"] = {}

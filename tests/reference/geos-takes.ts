@@ -25,6 +25,8 @@ export interface GeosJob {
   /** Also return the areas of the pieces of (parcel − corridor) for every taken parcel. */
   pieces?: boolean;
   repeat?: number;
+  /** The reference right-of-way as GEOS's buffer of the centreline (equal constant half-widths only): valid where the corridor covers ground twice. */
+  buffered?: boolean;
 }
 
 /** What GEOS computed. Areas in square units, times in seconds (measured inside python). */
