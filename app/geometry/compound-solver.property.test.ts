@@ -91,7 +91,8 @@ test("every set left with two free angles round-trips on ten more seeds, with an
   // condition, plus PI-triangle parts): their twin roots are the hard case of the search.
   const plain = PLAIN_SETS.filter(leavesTwoFreeAngles);
   const parallel = PARALLEL_SETS.filter(leavesTwoFreeAngles);
-  expect(plain.length).toBe(81);
+  // 81 of them, less {R1, R2, LC, φ_PC}: the chord-point closed forms finish that one (compound-chord-point.ts).
+  expect(plain.length).toBe(80);
   expect(parallel.length).toBe(45);
   for (const seed of [21, 22, 23, 24, 25, 26, 27, 28, 29, 30]) {
     fc.assert(
